@@ -1,14 +1,139 @@
 package io.github.eigengate.maven;
 
+import io.github.eigengate.check.Finding;
+import io.github.eigengate.engine.Gate;
+import io.github.eigengate.engine.Report;
+import io.github.eigengate.engine.Settings;
+import io.github.eigengate.report.ReportFiles;
+import java.io.File;
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Set;
 import org.apache.maven.plugin.AbstractMojo;
+import org.apache.maven.plugin.MojoExecutionException;
+import org.apache.maven.plugin.MojoFailureException;
 import org.apache.maven.plugins.annotations.LifecyclePhase;
 import org.apache.maven.plugins.annotations.Mojo;
+import org.apache.maven.plugins.annotations.Parameter;
 
-/** Checks the datasets of a modular-forms repository (placeholder while the gate is built). */
+/**
+ * Checks the modular-forms datasets of the project against the theorems they must satisfy, and fails the build on
+ * any error finding. Reads only; writes reports under {@code outputDirectory}.
+ */
 @Mojo(name = "check", defaultPhase = LifecyclePhase.VERIFY, threadSafe = true)
 public final class CheckMojo extends AbstractMojo {
+
+    /** Dataset directories to check. Default: {@code ${project.basedir}/data}. */
+    @Parameter(property = "eigengate.datasets", defaultValue = "${project.basedir}/data")
+    private List<File> datasets;
+
+    /** Skips the whole check. Default: false. */
+    @Parameter(property = "eigengate.skip", defaultValue = "false")
+    private boolean skip;
+
+    /** Ids of checks not to run (see docs/checks.md). Default: none. */
+    @Parameter(property = "eigengate.skipChecks")
+    private List<String> skipChecks;
+
+    /** Findings listed in full; further ones are counted only. Default: 1000. */
+    @Parameter(property = "eigengate.maxFindings", defaultValue = "1000")
+    private int maxFindings;
+
+    /**
+     * Severity of a congruence that holds as far as the data go but cannot be certified because the data stop
+     * below the Sturm-type bound: {@code error} or {@code warning}. Default: error.
+     */
+    @Parameter(property = "eigengate.uncertified", defaultValue = "error")
+    private String uncertified;
+
+    /** Where report.json, TEST-eigengate.xml and certificates/ go. Default: {@code ${project.build.directory}/eigengate}. */
+    @Parameter(property = "eigengate.outputDirectory", defaultValue = "${project.build.directory}/eigengate")
+    private File outputDirectory;
+
+    @Parameter(defaultValue = "${project.basedir}", readonly = true, required = true)
+    private File basedir;
+
     @Override
-    public void execute() {
-        getLog().info("eigengate: nothing checked yet");
+    public void execute() throws MojoExecutionException, MojoFailureException {
+        if (skip) {
+            getLog().info("eigengate: skipped");
+            return;
+        }
+        Settings settings = settings();
+        List<Gate.Dataset> sets = new ArrayList<>();
+        for (File f : datasets == null ? List.<File>of() : datasets) {
+            sets.add(new Gate.Dataset(f.toPath(), display(f.toPath())));
+        }
+        if (sets.isEmpty()) {
+            throw new MojoExecutionException("eigengate: no dataset directories configured (parameter 'datasets')");
+        }
+        Report report = new Gate(settings).run(sets);
+        try {
+            ReportFiles.write(report, outputDirectory.toPath());
+        } catch (IOException e) {
+            throw new MojoExecutionException("eigengate: cannot write reports to " + outputDirectory + ": "
+                    + e.getMessage(), e);
+        }
+        log(report);
+        if (report.failed()) {
+            throw new MojoFailureException("eigengate: " + report.errors() + " error"
+                    + (report.errors() == 1 ? "" : "s") + " in the data (listed above; full report in "
+                    + display(outputDirectory.toPath().resolve(ReportFiles.JSON)) + ")");
+        }
+    }
+
+    private Settings settings() throws MojoExecutionException {
+        Set<String> skipIds = new HashSet<>();
+        List<String> known = Gate.knownIds();
+        for (String s : skipChecks == null ? List.<String>of() : skipChecks) {
+            String id = s.strip();
+            if (id.isEmpty()) {
+                continue;
+            }
+            if (!known.contains(id)) {
+                throw new MojoExecutionException("eigengate: unknown check '" + id + "' in skipChecks; known checks: "
+                        + String.join(", ", known));
+            }
+            skipIds.add(id);
+        }
+        String u = uncertified == null ? "error" : uncertified.strip().toLowerCase(Locale.ROOT);
+        if (!u.equals("error") && !u.equals("warning")) {
+            throw new MojoExecutionException("eigengate: 'uncertified' must be error or warning, was '" + uncertified
+                    + "'");
+        }
+        if (maxFindings < 1) {
+            throw new MojoExecutionException("eigengate: 'maxFindings' must be at least 1, was " + maxFindings);
+        }
+        return new Settings(maxFindings, skipIds, u.equals("warning"));
+    }
+
+    private void log(Report report) {
+        String summary = "eigengate: " + report.summary();
+        if (report.failed()) {
+            getLog().error(summary);
+        } else {
+            getLog().info(summary);
+        }
+        for (Finding f : report.findings()) {
+            switch (f.severity()) {
+                case ERROR -> getLog().error(f.line());
+                case WARNING -> getLog().warn(f.line());
+                case NOTE -> getLog().info(f.line());
+            }
+        }
+    }
+
+    private String display(Path p) {
+        Path base = basedir.toPath().toAbsolutePath().normalize();
+        Path abs = p.toAbsolutePath().normalize();
+        if (abs.startsWith(base)) {
+            String rel = base.relativize(abs).toString();
+            return rel.isEmpty() ? "." : rel.replace(File.separatorChar, '/');
+        }
+        return abs.toString();
     }
 }

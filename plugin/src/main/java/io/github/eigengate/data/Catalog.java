@@ -1,0 +1,27 @@
+package io.github.eigengate.data;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Everything of one dataset but the coefficients: the forms, the declared spaces and the claims tables. Small;
+ * held in memory for the whole run.
+ *
+ * @param directory         the dataset directory
+ * @param display           how reports name it (relative to the project when possible)
+ * @param forms             by id, in file order
+ * @param spaces            rows of {@code spaces.csv}
+ * @param coefficientFiles  {@code coefficients.csv} then the shards {@code coefficients-*.csv}, by name
+ * @param congruences       rows of {@code congruences.csv}
+ * @param reducible         rows of {@code reducible.csv}
+ * @param weights           rows of {@code modp-weights.csv}
+ */
+public record Catalog(Path directory, String display, Map<String, Form> forms, List<SpaceRow> spaces,
+                      List<Path> coefficientFiles, List<TableRow> congruences, List<TableRow> reducible,
+                      List<TableRow> weights) {
+
+    public Form form(String id) {
+        return forms.get(id);
+    }
+}

@@ -1,0 +1,203 @@
+package io.github.eigengate.data;
+
+import io.github.eigengate.arith.ExpressionSyntaxException;
+import io.github.eigengate.arith.NumberField;
+import io.github.eigengate.arith.QPoly;
+import io.github.eigengate.arith.ZFactorization;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.stream.Stream;
+
+/**
+ * Reads everything of a dataset directory except the coefficients, which {@link CoefficientReader} streams.
+ * Malformed rows are reported and left out; the catalog holds what could be read.
+ */
+public final class CatalogReader {
+
+    private CatalogReader() {
+    }
+
+    /**
+     * @param directory the dataset directory
+     * @param display   the directory as reports name it
+     * @return the catalog, or {@code null} (after reporting) when the directory or {@code forms.csv} is missing
+     */
+    public static Catalog read(Path directory, String display, Problems problems) {
+        if (!Files.isDirectory(directory)) {
+            problems.error(SourceLocation.file(display), "dataset=" + display, "a dataset directory",
+                    Files.exists(directory) ? "a file" : "nothing", "the dataset directory does not exist");
+            return null;
+        }
+        Path formsFile = directory.resolve(Tables.FORMS);
+        if (!Files.isRegularFile(formsFile)) {
+            problems.error(SourceLocation.file(name(display, Tables.FORMS)), "dataset=" + display,
+                    "a file " + Tables.FORMS, "none", "every dataset needs " + Tables.FORMS);
+            return null;
+        }
+        Map<String, Form> forms = readForms(formsFile, name(display, Tables.FORMS), problems);
+        List<SpaceRow> spaces = readSpaces(directory, display, problems);
+        List<Path> shards = coefficientFiles(directory, display, problems);
+        List<TableRow> congruences = readRows(directory, display, Tables.CONGRUENCES, Tables.CONGRUENCES_REQUIRED,
+                Tables.CONGRUENCES_OPTIONAL, problems);
+        List<TableRow> reducible = readRows(directory, display, Tables.REDUCIBLE, Tables.REDUCIBLE_REQUIRED,
+                Tables.REDUCIBLE_OPTIONAL, problems);
+        List<TableRow> weights = readRows(directory, display, Tables.WEIGHTS, Tables.WEIGHTS_REQUIRED,
+                Tables.WEIGHTS_OPTIONAL, problems);
+        return new Catalog(directory, display, forms, spaces, shards, congruences, reducible, weights);
+    }
+
+    static String name(String display, String file) {
+        return display.isEmpty() || display.equals(".") ? file : display + "/" + file;
+    }
+
+    private static Map<String, Form> readForms(Path file, String display, Problems problems) {
+        Map<String, Form> forms = new LinkedHashMap<>();
+        Map<String, QPolyCache> fields = new HashMap<>();
+        CsvTable.of(file, display, Tables.FORMS_REQUIRED, Tables.FORMS_OPTIONAL).read(problems, row -> {
+            String id = row.get("id");
+            String subject = "form=" + (id.isEmpty() ? "?" : id);
+            if (id.isEmpty()) {
+                problems.error(row.at("id"), subject, "a form id", "an empty cell", "every form needs an id");
+                return;
+            }
+            if (forms.containsKey(id)) {
+                problems.error(row.at("id"), subject, "a unique id", id,
+                        "the id is already used at line " + forms.get(id).location().line());
+                return;
+            }
+            Integer level = Cells.integer(row, "level", 1, Integer.MAX_VALUE, subject, problems);
+            Integer weight = Cells.integer(row, "weight", 1, Integer.MAX_VALUE, subject, problems);
+            String character = row.get("character");
+            boolean characterOk = character.isEmpty() || character.equals("1");
+            if (!characterOk) {
+                problems.error(row.at("character"), subject, "empty or 1 (the trivial character)", character,
+                        "nontrivial characters are not supported yet");
+            }
+            String fieldText = row.get("field");
+            NumberField field = null;
+            boolean fieldOk = true;
+            if (!fieldText.isEmpty()) {
+                QPolyCache cached = fields.computeIfAbsent(Cells.compact(fieldText), CatalogReader::field);
+                if (cached.problem != null) {
+                    problems.error(row.at("field"), subject, cached.expected, fieldText, cached.problem);
+                    fieldOk = false;
+                } else {
+                    field = cached.field;
+                }
+            }
+            if (level != null && weight != null && characterOk && fieldOk) {
+                forms.put(id, new Form(id, level, weight, field, row.at()));
+            }
+        });
+        return forms;
+    }
+
+    /** A parsed and validated field polynomial, shared by the forms that use it. */
+    private record QPolyCache(NumberField field, String expected, String problem) {
+    }
+
+    private static QPolyCache field(String text) {
+        String expected = "a monic irreducible polynomial in x with integer coefficients";
+        QPoly f;
+        try {
+            f = QPoly.parse(text);
+        } catch (ExpressionSyntaxException e) {
+            return new QPolyCache(null, expected, "the polynomial cannot be read at character " + (e.offset() + 1)
+                    + ": expected " + e.expected());
+        }
+        if (f.degree() < 1) {
+            return new QPolyCache(null, expected, "a field polynomial must have degree at least 1");
+        }
+        if (!f.isMonic()) {
+            return new QPolyCache(null, expected, "the field polynomial is not monic");
+        }
+        if (!f.hasIntegerCoefficients()) {
+            return new QPolyCache(null, expected, "the field polynomial has non-integral coefficients");
+        }
+        if (!ZFactorization.isIrreducible(f)) {
+            List<QPoly> factors = ZFactorization.factor(f);
+            return new QPolyCache(null, expected, "the field polynomial is reducible over Q: it factors as "
+                    + factors.stream().map(g -> "(" + g + ")").reduce((a, b) -> a + "*" + b).orElse(""));
+        }
+        return new QPolyCache(NumberField.of(f), expected, null);
+    }
+
+    private static List<SpaceRow> readSpaces(Path directory, String display, Problems problems) {
+        Path file = directory.resolve(Tables.SPACES);
+        List<SpaceRow> spaces = new ArrayList<>();
+        if (!Files.isRegularFile(file)) {
+            return spaces;
+        }
+        String shown = name(display, Tables.SPACES);
+        Map<SpaceKey, Integer> seen = new HashMap<>();
+        CsvTable.of(file, shown, Tables.SPACES_REQUIRED, Tables.SPACES_OPTIONAL).read(problems, row -> {
+            String subject = "space=line " + row.line();
+            Integer level = Cells.integer(row, "level", 1, Integer.MAX_VALUE, subject, problems);
+            Integer weight = Cells.integer(row, "weight", 1, Integer.MAX_VALUE, subject, problems);
+            String character = row.get("character");
+            if (!character.isEmpty() && !character.equals("1")) {
+                problems.error(row.at("character"), subject, "empty or 1 (the trivial character)", character,
+                        "nontrivial characters are not supported yet");
+                return;
+            }
+            if (level == null || weight == null) {
+                return;
+            }
+            SpaceKey key = new SpaceKey(level, weight);
+            Integer before = seen.putIfAbsent(key, row.line());
+            if (before != null) {
+                problems.warning(row.at(), "space=" + key, "each space once", key.toString(),
+                        "the space is already declared at line " + before);
+                return;
+            }
+            spaces.add(new SpaceRow(key, row.at()));
+        });
+        return spaces;
+    }
+
+    private static List<Path> coefficientFiles(Path directory, String display, Problems problems) {
+        List<Path> files = new ArrayList<>();
+        Path main = directory.resolve(Tables.COEFFICIENTS);
+        if (Files.isRegularFile(main)) {
+            files.add(main);
+        }
+        try (Stream<Path> list = Files.list(directory)) {
+            list.filter(p -> {
+                String n = p.getFileName().toString();
+                return n.startsWith(Tables.COEFFICIENT_SHARD_PREFIX) && n.endsWith(".csv") && Files.isRegularFile(p);
+            }).sorted().forEach(files::add);
+        } catch (IOException e) {
+            problems.error(SourceLocation.file(display), "dataset=" + display, "a readable directory",
+                    "an I/O error", "the dataset directory cannot be listed: " + e.getMessage());
+        }
+        return files;
+    }
+
+    private static List<TableRow> readRows(Path directory, String display, String fileName, List<String> required,
+                                           List<String> optional, Problems problems) {
+        Path file = directory.resolve(fileName);
+        List<TableRow> rows = new ArrayList<>();
+        if (!Files.isRegularFile(file)) {
+            return rows;
+        }
+        CsvTable table = CsvTable.of(file, name(display, fileName), required, optional);
+        table.read(problems, row -> {
+            Map<String, String> cells = new HashMap<>();
+            Map<String, Integer> columns = new HashMap<>();
+            for (String column : table.known()) {
+                if (row.has(column)) {
+                    cells.put(column, row.get(column));
+                    columns.put(column, row.at(column).column());
+                }
+            }
+            rows.add(new TableRow(table.display(), row.line(), cells, columns));
+        });
+        return rows;
+    }
+}

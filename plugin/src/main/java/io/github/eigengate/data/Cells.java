@@ -1,0 +1,76 @@
+package io.github.eigengate.data;
+
+import java.math.BigInteger;
+
+/** Parsing of single cells, reporting what was expected when a cell is malformed. */
+final class Cells {
+
+    private Cells() {
+    }
+
+    /**
+     * A decimal integer in [min, max], or {@code null} after reporting. Empty cells are reported as missing.
+     */
+    static Integer integer(CsvTable.Row row, String column, long min, long max, String subject, Problems problems) {
+        String text = row.get(column);
+        if (text.isEmpty()) {
+            problems.error(row.at(column), subject, "an integer in " + range(min, max), "an empty cell",
+                    "the column '" + column + "' needs a value");
+            return null;
+        }
+        if (!isInteger(text)) {
+            problems.error(row.at(column), subject, "an integer in " + range(min, max), text,
+                    "'" + column + "' must be a decimal integer");
+            return null;
+        }
+        BigInteger v = new BigInteger(text);
+        if (v.compareTo(BigInteger.valueOf(min)) < 0 || v.compareTo(BigInteger.valueOf(max)) > 0) {
+            problems.error(row.at(column), subject, "an integer in " + range(min, max), text,
+                    "'" + column + "' is out of range");
+            return null;
+        }
+        return v.intValueExact();
+    }
+
+    static String range(long min, long max) {
+        return max >= Integer.MAX_VALUE ? "[" + min + ", " + Integer.MAX_VALUE + "]" : "[" + min + ", " + max + "]";
+    }
+
+    /** Optional sign, then decimal digits. */
+    static boolean isInteger(String s) {
+        int i = 0;
+        int len = s.length();
+        if (len > 0 && (s.charAt(0) == '-' || s.charAt(0) == '+')) {
+            i = 1;
+        }
+        if (i == len) {
+            return false;
+        }
+        for (; i < len; i++) {
+            char c = s.charAt(i);
+            if (c < '0' || c > '9') {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /** Removes all whitespace: the contract says whitespace inside a value is ignored. */
+    static String compact(String s) {
+        int i = 0;
+        while (i < s.length() && !Character.isWhitespace(s.charAt(i))) {
+            i++;
+        }
+        if (i == s.length()) {
+            return s;
+        }
+        StringBuilder b = new StringBuilder(s.length());
+        for (int j = 0; j < s.length(); j++) {
+            char c = s.charAt(j);
+            if (!Character.isWhitespace(c)) {
+                b.append(c);
+            }
+        }
+        return b.toString();
+    }
+}

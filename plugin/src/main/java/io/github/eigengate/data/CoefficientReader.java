@@ -1,0 +1,225 @@
+package io.github.eigengate.data;
+
+import io.github.eigengate.arith.ExpressionSyntaxException;
+import io.github.eigengate.arith.Field;
+import io.github.eigengate.arith.NumberField;
+import io.github.eigengate.arith.QPoly;
+import io.github.eigengate.arith.Rational;
+import io.github.eigengate.arith.Rationals;
+import java.math.BigInteger;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.function.Consumer;
+
+/**
+ * Streams the coefficient tables and hands each form's coefficients to a consumer once they are complete.
+ *
+ * <p>Rows of one form are usually contiguous; then a form is delivered as soon as its run of rows ends, and memory
+ * stays bounded by the largest form. A form whose rows come in several runs (in one file or across shards) is
+ * detected on its second run; the caller then streams again with that form in {@code holdBack}, which collects it
+ * over all files and delivers it at the end. See {@code Gate}.
+ */
+public final class CoefficientReader {
+
+    private final Catalog catalog;
+    private final Set<String> holdBack;
+    private final Problems problems;
+    private final Consumer<FormData<?>> out;
+
+    private final Set<String> delivered = new HashSet<>();
+    private final Set<String> scattered = new HashSet<>();
+    private final Map<String, Block<?>> held = new LinkedHashMap<>();
+    private Block<?> current;
+    private String unknownRun;
+
+    private CoefficientReader(Catalog catalog, Set<String> holdBack, Problems problems, Consumer<FormData<?>> out) {
+        this.catalog = catalog;
+        this.holdBack = holdBack;
+        this.problems = problems;
+        this.out = out;
+    }
+
+    /**
+     * Streams every coefficient file of the catalog.
+     *
+     * @return the forms whose rows were found in more than one run and were not held back: their deliveries were
+     *     incomplete, and the caller must stream again holding them back
+     */
+    public static Set<String> stream(Catalog catalog, Set<String> holdBack, Problems problems,
+                                     Consumer<FormData<?>> out) {
+        CoefficientReader reader = new CoefficientReader(catalog, holdBack, problems, out);
+        for (Path file : catalog.coefficientFiles()) {
+            String shown = CatalogReader.name(catalog.display(), file.getFileName().toString());
+            CsvTable.of(file, shown, Tables.COEFFICIENTS_REQUIRED, List.of()).read(problems,
+                    row -> reader.row(row, shown));
+            reader.endRun();
+        }
+        for (Block<?> block : reader.held.values()) {
+            out.accept(block.finish());
+        }
+        return reader.scattered;
+    }
+
+    private void row(CsvTable.Row row, String file) {
+        String id = row.get("form");
+        if (current == null || !current.form.id().equals(id)) {
+            endRun();
+            startRun(row, id);
+        }
+        if (current == null) {
+            return;
+        }
+        Integer n = Cells.integer(row, "n", 1, Integer.MAX_VALUE, "form=" + id, problems);
+        if (n == null) {
+            return;
+        }
+        current.add(n, row, file);
+    }
+
+    private void startRun(CsvTable.Row row, String id) {
+        Form form = catalog.form(id);
+        if (form == null) {
+            if (!id.equals(unknownRun)) {
+                problems.error(row.at("form"), "form=" + (id.isEmpty() ? "?" : id), "a form id from forms.csv",
+                        id.isEmpty() ? "an empty cell" : id,
+                        "no form with this id is declared; its rows are skipped");
+            }
+            unknownRun = id;
+            return;
+        }
+        unknownRun = null;
+        Block<?> resume = held.get(id);
+        if (resume != null) {
+            current = resume;
+            return;
+        }
+        if (holdBack.contains(id)) {
+            current = Block.of(form, problems);
+            held.put(id, current);
+            return;
+        }
+        if (delivered.contains(id)) {
+            scattered.add(id);
+        }
+        current = Block.of(form, problems);
+    }
+
+    private void endRun() {
+        if (current != null && !held.containsKey(current.form.id())) {
+            delivered.add(current.form.id());
+            out.accept(current.finish());
+        }
+        current = null;
+        unknownRun = null;
+    }
+
+    /** One form's rows being collected. */
+    private static final class Block<E> {
+        final Form form;
+        final Field<E> field;
+        final Problems problems;
+        final Coefficients.Builder<E> builder = new Coefficients.Builder<>();
+        final Parser<E> parser;
+
+        private Block(Form form, Field<E> field, Parser<E> parser, Problems problems) {
+            this.form = form;
+            this.field = field;
+            this.parser = parser;
+            this.problems = problems;
+        }
+
+        static Block<?> of(Form form, Problems problems) {
+            if (form.rational()) {
+                return new Block<>(form, Rationals.FIELD, CoefficientReader::rational, problems);
+            }
+            NumberField k = form.field();
+            return new Block<>(form, k, (text, f) -> element(k, text, f), problems);
+        }
+
+        void add(int n, CsvTable.Row row, String file) {
+            String text = row.get("value");
+            String subject = "form=" + form.id() + " n=" + n;
+            if (text.isEmpty()) {
+                problems.error(row.at("value"), subject, expectation(form), "an empty cell", "a_" + n + " is missing");
+                return;
+            }
+            Object parsed = parser.parse(text, form);
+            if (parsed instanceof String problem) {
+                problems.error(row.at("value"), subject, expectation(form), text, problem);
+                return;
+            }
+            @SuppressWarnings("unchecked")
+            E value = (E) parsed;
+            E before = builder.get(n);
+            if (before != null) {
+                SourceLocation first = builder.at(n);
+                if (before.equals(value)) {
+                    problems.warning(row.at("value"), subject, "each (form, n) once", text,
+                            "a_" + n + " is given again with the same value (first at " + first + ")");
+                } else {
+                    problems.error(row.at("value"), subject, before.toString(), text,
+                            "a_" + n + " is given twice with different values (first at " + first + ")");
+                }
+                return;
+            }
+            builder.put(n, value, file, row.line());
+        }
+
+        FormData<E> finish() {
+            return new FormData<>(form, field, builder.build());
+        }
+    }
+
+    /** Parses a cell to an element, or returns a String saying what is wrong. */
+    private interface Parser<E> {
+        Object parse(String text, Form form);
+    }
+
+    static String expectation(Form form) {
+        return form.rational() ? "an integer"
+                : "a polynomial in x with rational coefficients or a vector [c0, ..., c" + (form.degree() - 1) + "]";
+    }
+
+    private static Object rational(String text, Form form) {
+        String s = Cells.compact(text);
+        if (!Cells.isInteger(s)) {
+            return "the form has rational coefficients (no field), so a_n must be an integer";
+        }
+        return Rational.of(new BigInteger(s));
+    }
+
+    private static Object element(NumberField k, String text, Form form) {
+        String s = Cells.compact(text);
+        if (s.startsWith("[")) {
+            if (!s.endsWith("]")) {
+                return "a vector must end with ']'";
+            }
+            String inner = s.substring(1, s.length() - 1);
+            String[] parts = inner.isEmpty() ? new String[0] : inner.split(",", -1);
+            if (parts.length != k.degree()) {
+                return "the vector has " + parts.length + " entries but the field has degree " + k.degree();
+            }
+            List<Rational> coords = new ArrayList<>(parts.length);
+            for (int i = 0; i < parts.length; i++) {
+                try {
+                    coords.add(Rational.parse(parts[i]));
+                } catch (ExpressionSyntaxException | ArithmeticException e) {
+                    return "entry " + (i + 1) + " of the vector is not a rational number";
+                }
+            }
+            return k.element(coords);
+        }
+        try {
+            return k.element(QPoly.parse(s));
+        } catch (ExpressionSyntaxException e) {
+            return "the expression cannot be read at character " + (e.offset() + 1) + ": expected " + e.expected();
+        } catch (ArithmeticException e) {
+            return "the expression is not a valid number: " + e.getMessage();
+        }
+    }
+}

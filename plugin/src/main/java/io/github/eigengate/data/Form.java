@@ -1,0 +1,38 @@
+package io.github.eigengate.data;
+
+import io.github.eigengate.arith.Field;
+import io.github.eigengate.arith.NumberField;
+import io.github.eigengate.arith.QPoly;
+import io.github.eigengate.arith.Rationals;
+
+/**
+ * One newform (orbit) declared in {@code forms.csv}: level N, weight k, trivial character, and the field its
+ * coefficients a_n lie in.
+ *
+ * @param field the coefficient field Q[x]/(f), or {@code null} when the coefficients are rational
+ */
+public record Form(String id, int level, int weight, NumberField field, SourceLocation location) {
+
+    public boolean rational() {
+        return field == null;
+    }
+
+    /** [K_f : Q]. */
+    public int degree() {
+        return field == null ? 1 : field.degree();
+    }
+
+    /** The defining polynomial, {@code x} for Q. */
+    public QPoly fieldPolynomial() {
+        return field == null ? QPoly.x() : field.polynomial();
+    }
+
+    public Field<?> coefficientField() {
+        return field == null ? Rationals.FIELD : field;
+    }
+
+    /** The space this form belongs to, as reports write it. */
+    public SpaceKey space() {
+        return new SpaceKey(level, weight);
+    }
+}

@@ -1,0 +1,17 @@
+package io.github.eigengate.engine;
+
+import io.github.eigengate.check.Check;
+import io.github.eigengate.check.form.Normalisation;
+import java.util.List;
+
+/** The checks Eigengate runs, in report order. A new check is added here (see DEVELOPERS.md). */
+public final class Checks {
+
+    private Checks() {
+    }
+
+    public static List<Check> all(Settings settings) {
+        return List.of(
+                new Normalisation());
+    }
+}

@@ -1,0 +1,91 @@
+package io.github.eigengate.engine;
+
+import io.github.eigengate.check.Certificate;
+import io.github.eigengate.check.Finding;
+import io.github.eigengate.check.FindingSink;
+import io.github.eigengate.check.Severity;
+import io.github.eigengate.check.Subject;
+import io.github.eigengate.data.Problems;
+import io.github.eigengate.data.SourceLocation;
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+/** Gathers the findings of one run, keeping the first {@code cap} in full and counting the rest. */
+final class Collector implements FindingSink, Problems {
+
+    private final int cap;
+    private final List<Finding> kept = new ArrayList<>();
+    private final Map<Severity, Integer> counts = new EnumMap<>(Severity.class);
+    private final Map<String, Set<Subject>> examined = new LinkedHashMap<>();
+    private final List<Certificate> certificates = new ArrayList<>();
+    private int dropped;
+
+    Collector(int cap) {
+        this.cap = cap;
+        for (Severity s : Severity.values()) {
+            counts.put(s, 0);
+        }
+    }
+
+    @Override
+    public void report(Finding finding) {
+        counts.merge(finding.severity(), 1, Integer::sum);
+        examined(finding.check(), unitOf(finding.subject()));
+        if (kept.size() < cap) {
+            kept.add(finding);
+        } else {
+            dropped++;
+        }
+    }
+
+    private static Subject unitOf(Subject s) {
+        return new Subject(s.kind(), s.name(), "");
+    }
+
+    @Override
+    public void examined(String check, Subject unit) {
+        examined.computeIfAbsent(check, k -> new LinkedHashSet<>()).add(unitOf(unit));
+    }
+
+    @Override
+    public void error(SourceLocation at, String subject, String expected, String found, String reason) {
+        report(new Finding(CHECK_ID, Severity.ERROR, at, new Subject("table", at.file(), subject), expected, found,
+                reason));
+    }
+
+    @Override
+    public void warning(SourceLocation at, String subject, String expected, String found, String reason) {
+        report(new Finding(CHECK_ID, Severity.WARNING, at, new Subject("table", at.file(), subject), expected, found,
+                reason));
+    }
+
+    @Override
+    public void certificate(Certificate certificate) {
+        certificates.add(certificate);
+    }
+
+    List<Certificate> certificates() {
+        return certificates;
+    }
+
+    List<Finding> kept() {
+        return kept;
+    }
+
+    Map<Severity, Integer> counts() {
+        return counts;
+    }
+
+    int dropped() {
+        return dropped;
+    }
+
+    Map<String, Set<Subject>> examined() {
+        return examined;
+    }
+}

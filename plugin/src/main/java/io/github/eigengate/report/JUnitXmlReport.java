@@ -1,0 +1,115 @@
+package io.github.eigengate.report;
+
+import io.github.eigengate.check.Finding;
+import io.github.eigengate.check.Severity;
+import io.github.eigengate.check.Subject;
+import io.github.eigengate.engine.Report;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+/**
+ * Renders a run in the JUnit XML layout CI servers display: one {@code testsuite} per check, one {@code testcase}
+ * per unit it examined (a form, a space, a congruence, a table); errors are failures, warnings and notes go to the
+ * test case's {@code system-out}.
+ */
+public final class JUnitXmlReport {
+
+    private JUnitXmlReport() {
+    }
+
+    public static String render(Report r) {
+        Map<String, Map<Subject, List<Finding>>> byCheck = new LinkedHashMap<>();
+        for (Map.Entry<String, Set<Subject>> e : r.examined().entrySet()) {
+            Map<Subject, List<Finding>> units = byCheck.computeIfAbsent(e.getKey(), k -> new LinkedHashMap<>());
+            for (Subject u : e.getValue()) {
+                units.computeIfAbsent(u, k -> new ArrayList<>());
+            }
+        }
+        for (Finding f : r.findings()) {
+            Subject unit = new Subject(f.subject().kind(), f.subject().name(), "");
+            byCheck.computeIfAbsent(f.check(), k -> new LinkedHashMap<>())
+                   .computeIfAbsent(unit, k -> new ArrayList<>()).add(f);
+        }
+        StringBuilder b = new StringBuilder(8192);
+        b.append("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n");
+        int total = 0;
+        int failures = 0;
+        for (Map<Subject, List<Finding>> units : byCheck.values()) {
+            total += units.size();
+            for (List<Finding> fs : units.values()) {
+                if (fs.stream().anyMatch(f -> f.severity() == Severity.ERROR)) {
+                    failures++;
+                }
+            }
+        }
+        b.append("<testsuites name=\"eigengate\" tests=\"").append(total).append("\" failures=\"").append(failures)
+         .append("\" errors=\"0\">\n");
+        for (Map.Entry<String, Map<Subject, List<Finding>>> e : byCheck.entrySet()) {
+            String suite = "eigengate." + e.getKey();
+            Map<Subject, List<Finding>> units = e.getValue();
+            long failed = units.values().stream()
+                    .filter(fs -> fs.stream().anyMatch(f -> f.severity() == Severity.ERROR)).count();
+            b.append("  <testsuite name=\"").append(attr(suite)).append("\" tests=\"").append(units.size())
+             .append("\" failures=\"").append(failed).append("\" errors=\"0\" skipped=\"0\">\n");
+            for (Map.Entry<Subject, List<Finding>> u : units.entrySet()) {
+                b.append("    <testcase classname=\"").append(attr(suite)).append("\" name=\"")
+                 .append(attr(u.getKey().unit())).append('"');
+                List<Finding> errors = u.getValue().stream().filter(f -> f.severity() == Severity.ERROR).toList();
+                List<Finding> others = u.getValue().stream().filter(f -> f.severity() != Severity.ERROR).toList();
+                if (errors.isEmpty() && others.isEmpty()) {
+                    b.append("/>\n");
+                    continue;
+                }
+                b.append(">\n");
+                if (!errors.isEmpty()) {
+                    b.append("      <failure message=\"").append(attr(errors.get(0).line())).append("\" type=\"")
+                     .append(attr(e.getKey())).append("\">");
+                    b.append(text(lines(errors))).append("</failure>\n");
+                }
+                if (!others.isEmpty()) {
+                    b.append("      <system-out>").append(text(lines(others))).append("</system-out>\n");
+                }
+                b.append("    </testcase>\n");
+            }
+            b.append("  </testsuite>\n");
+        }
+        b.append("</testsuites>\n");
+        return b.toString();
+    }
+
+    private static String lines(List<Finding> fs) {
+        Set<String> ls = new LinkedHashSet<>();
+        for (Finding f : fs) {
+            ls.add(f.line());
+        }
+        return String.join("\n", ls);
+    }
+
+    private static String attr(String s) {
+        return text(s).replace("\"", "&quot;").replace("\n", "&#10;");
+    }
+
+    private static String text(String s) {
+        StringBuilder b = new StringBuilder(s.length());
+        for (int i = 0; i < s.length(); i++) {
+            char c = s.charAt(i);
+            switch (c) {
+                case '&' -> b.append("&amp;");
+                case '<' -> b.append("&lt;");
+                case '>' -> b.append("&gt;");
+                default -> {
+                    if (c < 0x20 && c != '\n' && c != '\t' && c != '\r') {
+                        b.append('?');
+                    } else {
+                        b.append(c);
+                    }
+                }
+            }
+        }
+        return b.toString();
+    }
+}

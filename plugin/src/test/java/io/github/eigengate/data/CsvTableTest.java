@@ -1,0 +1,108 @@
+package io.github.eigengate.data;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import io.github.eigengate.engine.Datasets;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class CsvTableTest {
+
+    @TempDir
+    Path dir;
+
+    /** Records what a reader reports, as strings. */
+    static final class Recorded implements Problems {
+        final List<String> errors = new ArrayList<>();
+        final List<String> warnings = new ArrayList<>();
+
+        @Override
+        public void error(SourceLocation at, String subject, String expected, String found, String reason) {
+            errors.add(at + " " + subject + " | " + expected + " | " + found + " | " + reason);
+        }
+
+        @Override
+        public void warning(SourceLocation at, String subject, String expected, String found, String reason) {
+            warnings.add(at + " " + subject + " | " + expected + " | " + found + " | " + reason);
+        }
+    }
+
+    private List<String> lines(String content, List<String> required, List<String> optional, Recorded problems) {
+        Datasets.write(dir, "t.csv", content);
+        List<String> seen = new ArrayList<>();
+        CsvTable.of(dir.resolve("t.csv"), "t.csv", required, optional).read(problems,
+                row -> seen.add(row.line() + ":" + row.get("a") + "/" + row.get("b") + "@" + row.at("b").column()));
+        return seen;
+    }
+
+    @Test
+    void rowsCarryTheirPhysicalLineAcrossCommentsBlankLinesAndQuotedBreaks() {
+        Recorded p = new Recorded();
+        List<String> seen = lines("# provenance\n# more\nb,a\n\n2,1\n# mid comment\n\"x\ny\",3\n5, 4 \n",
+                List.of("a", "b"), List.of(), p);
+        assertEquals(List.of("5:1/2@1", "7:3/x\ny@1", "9:4/5@1"), seen);
+        assertTrue(p.errors.isEmpty());
+    }
+
+    @Test
+    void missingRequiredColumnIsAnErrorOnTheHeaderLine() {
+        Recorded p = new Recorded();
+        List<String> seen = lines("# c\na\n1\n", List.of("a", "b"), List.of(), p);
+        assertTrue(seen.isEmpty());
+        assertEquals(List.of("t.csv:2 table=t.csv | a column 'b' | columns a | the column 'b' is required in t.csv"),
+                p.errors);
+    }
+
+    @Test
+    void unknownColumnIsAWarning() {
+        Recorded p = new Recorded();
+        List<String> seen = lines("a,b,c\n1,2,3\n", List.of("a", "b"), List.of("d"), p);
+        assertEquals(List.of("2:1/2@2"), seen);
+        assertEquals(1, p.warnings.size());
+        assertTrue(p.warnings.get(0).startsWith("t.csv:1:3 table=t.csv | one of "), p.warnings.get(0));
+        assertTrue(p.warnings.get(0).endsWith("| c | unknown column 'c' is ignored"), p.warnings.get(0));
+    }
+
+    @Test
+    void emptyFileIsAnError() {
+        Recorded p = new Recorded();
+        lines("", List.of("a"), List.of(), p);
+        assertEquals(List.of("t.csv table=t.csv | a header row | an empty file | every table starts with a header "
+                + "row naming its columns"), p.errors);
+    }
+
+    @Test
+    void unterminatedQuoteIsReportedNotThrown() {
+        Recorded p = new Recorded();
+        List<String> seen = lines("a,b\n1,2\n3,\"4\n", List.of("a", "b"), List.of(), p);
+        assertEquals(List.of("2:1/2@2"), seen);
+        assertEquals(1, p.errors.size());
+        assertTrue(p.errors.get(0).contains("malformed CSV"), p.errors.get(0));
+    }
+
+    @Test
+    void invalidUtf8IsAnError() throws IOException {
+        Files.write(dir.resolve("t.csv"), new byte[] {'a', ',', 'b', '\n', (byte) 0xff, ',', '1', '\n'});
+        Recorded p = new Recorded();
+        boolean ok = CsvTable.of(dir.resolve("t.csv"), "t.csv", List.of("a"), List.of()).read(p, row -> { });
+        assertFalse(ok);
+        assertEquals(List.of("t.csv table=t.csv | UTF-8 text | bytes that are not UTF-8 | the file is not valid "
+                + "UTF-8"), p.errors);
+    }
+
+    @Test
+    void duplicateHeaderIsAnError() {
+        Recorded p = new Recorded();
+        lines("a,a\n1,2\n", List.of("a"), List.of(), p);
+        assertEquals(1, p.errors.size());
+        assertTrue(p.errors.get(0).startsWith("t.csv:1 table=t.csv | a header row of distinct names"),
+                p.errors.get(0));
+    }
+}
