@@ -1,0 +1,599 @@
+package io.github.eigengate.arith;
+
+import java.math.BigInteger;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Collections;
+import java.util.List;
+
+/**
+ * The algebra {@code K = Q[x]/(f)} for a monic polynomial {@code f} of degree {@code d >= 1} with
+ * rational coefficients; a number field when {@code f} is irreducible.
+ *
+ * <p>Irreducibility is not checked here (see {@link ZFactorization#isIrreducible(QPoly)}); all ring
+ * operations are valid for any monic {@code f}, but {@link Element#inverse()} only succeeds for
+ * elements of nonzero norm, which are all nonzero elements exactly when {@code f} is irreducible,
+ * and {@link Element#minPoly()} assumes irreducibility.
+ *
+ * <p>Elements are stored on the power basis {@code 1, x, ..., x^(d-1)} as integer numerators over
+ * one common positive denominator (in lowest terms), and products are reduced with a precomputed
+ * table of {@code x^k mod f} for {@code d <= k <= 2d-2}; traces use the power sums of the roots of
+ * {@code f}, precomputed by Newton's identities (Cohen, GTM 138, §4.3).
+ */
+public final class NumberField implements Field<NumberField.Element> {
+    private final QPoly f;
+    private final int d;
+    /** {@code x^(d+k) mod f = (1/redDen) * sum_j red[k][j] x^j} for {@code 0 <= k <= d-2}. */
+    private final BigInteger[][] red;
+    private final BigInteger redDen;
+    /** {@code f = x^d + (1/fDen) * sum_{j<d} fNum[j] x^j}. */
+    private final BigInteger[] fNum;
+    private final BigInteger fDen;
+    /** {@code traceOfPower[i] = Tr(x^i)} for {@code 0 <= i < d}. */
+    private final Rational[] traceOfPower;
+    private final Element zero;
+    private final Element one;
+
+    private NumberField(QPoly f) {
+        this.f = f;
+        this.d = f.degree();
+        // f's lower coefficients over a common denominator
+        Rational[] lower = Arrays.copyOf(f.coeffArray(), d);
+        BigInteger[] fn = new BigInteger[d];
+        BigInteger fd = commonDenominator(lower);
+        for (int j = 0; j < d; j++) {
+            fn[j] = lower[j].num().multiply(fd.divide(lower[j].den()));
+        }
+        this.fNum = fn;
+        this.fDen = fd;
+        // x^(d+k) mod f, iteratively: x^d = -(lower), x^(m+1) = x * x^m reduced
+        Rational[][] rr = new Rational[Math.max(d - 1, 0)][];
+        Rational[] cur = new Rational[d];
+        for (int j = 0; j < d; j++) {
+            cur[j] = lower[j].negate();
+        }
+        for (int k = 0; k < d - 1; k++) {
+            rr[k] = cur;
+            cur = timesX(cur, lower);
+        }
+        BigInteger e = BigInteger.ONE;
+        for (Rational[] row : rr) {
+            e = lcm(e, commonDenominator(row));
+        }
+        this.redDen = e;
+        this.red = new BigInteger[rr.length][];
+        for (int k = 0; k < rr.length; k++) {
+            red[k] = new BigInteger[d];
+            for (int j = 0; j < d; j++) {
+                red[k][j] = rr[k][j].num().multiply(e.divide(rr[k][j].den()));
+            }
+        }
+        // Newton's identities: s_k = -(k a_{d-k} + sum_{i=1}^{k-1} a_{d-i} s_{k-i})
+        Rational[] s = new Rational[d];
+        s[0] = Rational.of(d);
+        for (int k = 1; k < d; k++) {
+            Rational acc = Rational.of(k).multiply(f.coefficient(d - k));
+            for (int i = 1; i < k; i++) {
+                acc = acc.add(f.coefficient(d - i).multiply(s[k - i]));
+            }
+            s[k] = acc.negate();
+        }
+        this.traceOfPower = s;
+        BigInteger[] z = new BigInteger[d];
+        Arrays.fill(z, BigInteger.ZERO);
+        this.zero = new Element(this, z, BigInteger.ONE);
+        BigInteger[] o = z.clone();
+        o[0] = BigInteger.ONE;
+        this.one = new Element(this, o, BigInteger.ONE);
+    }
+
+    private static Rational[] timesX(Rational[] v, Rational[] lower) {
+        int d = v.length;
+        Rational top = v[d - 1];
+        Rational[] r = new Rational[d];
+        r[0] = Rational.ZERO;
+        System.arraycopy(v, 0, r, 1, d - 1);
+        if (top.signum() != 0) {
+            for (int j = 0; j < d; j++) {
+                r[j] = r[j].subtract(top.multiply(lower[j]));
+            }
+        }
+        return r;
+    }
+
+    private static BigInteger lcm(BigInteger a, BigInteger b) {
+        return a.divide(a.gcd(b)).multiply(b);
+    }
+
+    private static BigInteger commonDenominator(Rational[] v) {
+        BigInteger l = BigInteger.ONE;
+        for (Rational r : v) {
+            if (!r.isInteger()) {
+                l = lcm(l, r.den());
+            }
+        }
+        return l;
+    }
+
+    /**
+     * @param f monic polynomial of degree at least 1 (irreducibility is not checked)
+     * @return the algebra {@code Q[x]/(f)}
+     * @throws IllegalArgumentException if {@code f} is not monic or is constant
+     */
+    public static NumberField of(QPoly f) {
+        if (f.degree() < 1 || !f.isMonic()) {
+            throw new IllegalArgumentException("defining polynomial must be monic of degree >= 1: " + f);
+        }
+        return new NumberField(f);
+    }
+
+    /** @return the degree {@code d = deg f} */
+    public int degree() {
+        return d;
+    }
+
+    /** @return the defining polynomial {@code f} */
+    public QPoly polynomial() {
+        return f;
+    }
+
+    /** @return the class of {@code g} modulo {@code f} */
+    public Element element(QPoly g) {
+        if (g.degree() >= d) {
+            g = g.mod(f);
+        }
+        List<Rational> coords = new ArrayList<>(d);
+        for (int j = 0; j < d; j++) {
+            coords.add(g.coefficient(j));
+        }
+        return element(coords);
+    }
+
+    /**
+     * @param powerBasisCoords coordinates on {@code 1, x, ..., x^(d-1)}
+     * @throws IllegalArgumentException if the list does not have length {@code d}
+     */
+    public Element element(List<Rational> powerBasisCoords) {
+        if (powerBasisCoords.size() != d) {
+            throw new IllegalArgumentException(
+                    "expected " + d + " coordinates for " + name() + ", got " + powerBasisCoords.size());
+        }
+        Rational[] r = powerBasisCoords.toArray(new Rational[0]);
+        BigInteger l = commonDenominator(r);
+        BigInteger[] n = new BigInteger[d];
+        for (int j = 0; j < d; j++) {
+            n[j] = r[j].num().multiply(l.divide(r[j].den()));
+        }
+        return make(n, l);
+    }
+
+    /** @return the rational {@code q} as an element */
+    public Element fromRational(Rational q) {
+        BigInteger[] n = new BigInteger[d];
+        Arrays.fill(n, BigInteger.ZERO);
+        n[0] = q.num();
+        return new Element(this, n, q.den());
+    }
+
+    /** @return the class of {@code x} */
+    public Element generator() {
+        if (d == 1) {
+            return fromRational(f.coefficient(0).negate());
+        }
+        BigInteger[] n = new BigInteger[d];
+        Arrays.fill(n, BigInteger.ZERO);
+        n[1] = BigInteger.ONE;
+        return new Element(this, n, BigInteger.ONE);
+    }
+
+    /** Normalises numerators/denominator to lowest terms. */
+    private Element make(BigInteger[] n, BigInteger den) {
+        if (den.signum() < 0) {
+            for (int j = 0; j < d; j++) {
+                n[j] = n[j].negate();
+            }
+            den = den.negate();
+        }
+        BigInteger g = den;
+        for (int j = 0; j < d && !g.equals(BigInteger.ONE); j++) {
+            g = g.gcd(n[j]);
+        }
+        boolean allZero = true;
+        for (BigInteger c : n) {
+            if (c.signum() != 0) {
+                allZero = false;
+                break;
+            }
+        }
+        if (allZero) {
+            return zero;
+        }
+        if (!g.equals(BigInteger.ONE)) {
+            for (int j = 0; j < d; j++) {
+                n[j] = n[j].divide(g);
+            }
+            den = den.divide(g);
+        }
+        return new Element(this, n, den);
+    }
+
+    private Element own(Element a) {
+        if (a.field != this && !a.field.equals(this)) {
+            throw new IllegalArgumentException(
+                    "element of " + a.field.name() + " used as an element of " + name());
+        }
+        return a;
+    }
+
+    @Override
+    public Element zero() {
+        return zero;
+    }
+
+    @Override
+    public Element one() {
+        return one;
+    }
+
+    @Override
+    public Element add(Element a, Element b) {
+        return own(a).add(own(b));
+    }
+
+    @Override
+    public Element subtract(Element a, Element b) {
+        return own(a).subtract(own(b));
+    }
+
+    @Override
+    public Element multiply(Element a, Element b) {
+        return own(a).multiply(own(b));
+    }
+
+    @Override
+    public Element negate(Element a) {
+        return own(a).negate();
+    }
+
+    @Override
+    public Element inverse(Element a) {
+        return own(a).inverse();
+    }
+
+    @Override
+    public boolean isZero(Element a) {
+        return own(a).isZero();
+    }
+
+    @Override
+    public Element fromInteger(BigInteger n) {
+        return fromRational(Rational.of(n));
+    }
+
+    /** @return {@code "Q[x]/(f)"} */
+    @Override
+    public String name() {
+        return "Q[x]/(" + f + ")";
+    }
+
+    @Override
+    public String toString() {
+        return name();
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof NumberField k && f.equals(k.f);
+    }
+
+    @Override
+    public int hashCode() {
+        return f.hashCode();
+    }
+
+    /**
+     * An element of {@link NumberField}: immutable, equal when in the same field (same defining
+     * polynomial) with the same coordinates.
+     */
+    public static final class Element {
+        private final NumberField field;
+        private final BigInteger[] num;
+        private final BigInteger den;
+        private volatile QPoly charPoly;
+
+        private Element(NumberField field, BigInteger[] num, BigInteger den) {
+            this.field = field;
+            this.num = num;
+            this.den = den;
+        }
+
+        /** @return the field this element belongs to */
+        public NumberField field() {
+            return field;
+        }
+
+        /** @return coordinates on the power basis {@code 1, x, ..., x^(d-1)} (length {@code d}) */
+        public List<Rational> coordinates() {
+            List<Rational> r = new ArrayList<>(num.length);
+            for (BigInteger n : num) {
+                r.add(Rational.of(n, den));
+            }
+            return Collections.unmodifiableList(r);
+        }
+
+        /** @return numerators over {@link #commonDenominator()}; a copy */
+        BigInteger[] numerators() {
+            return num.clone();
+        }
+
+        /** @return the least positive integer {@code D} with {@code D * this} in {@code Z[x]/(f)} coordinates */
+        public BigInteger commonDenominator() {
+            return den;
+        }
+
+        /** @return the representative of degree {@code < d} */
+        public QPoly asPolynomial() {
+            return QPoly.wrap(coordinates().toArray(new Rational[0]));
+        }
+
+        /** @return whether this is zero */
+        public boolean isZero() {
+            return this == field.zero || (den.equals(BigInteger.ONE) && allZero(num));
+        }
+
+        private static boolean allZero(BigInteger[] v) {
+            for (BigInteger c : v) {
+                if (c.signum() != 0) {
+                    return false;
+                }
+            }
+            return true;
+        }
+
+        private Element other(Element o) {
+            return field.own(o);
+        }
+
+        /** @return {@code this + o} */
+        public Element add(Element o) {
+            other(o);
+            int d = num.length;
+            BigInteger[] r = new BigInteger[d];
+            if (den.equals(o.den)) {
+                for (int j = 0; j < d; j++) {
+                    r[j] = num[j].add(o.num[j]);
+                }
+                return den.equals(BigInteger.ONE) ? field.makeIntegral(r) : field.make(r, den);
+            }
+            for (int j = 0; j < d; j++) {
+                r[j] = num[j].multiply(o.den).add(o.num[j].multiply(den));
+            }
+            return field.make(r, den.multiply(o.den));
+        }
+
+        /** @return {@code this - o} */
+        public Element subtract(Element o) {
+            return add(other(o).negate());
+        }
+
+        /** @return {@code -this} */
+        public Element negate() {
+            BigInteger[] r = new BigInteger[num.length];
+            for (int j = 0; j < r.length; j++) {
+                r[j] = num[j].negate();
+            }
+            return new Element(field, r, den);
+        }
+
+        /** @return {@code this * o} */
+        public Element multiply(Element o) {
+            other(o);
+            int d = num.length;
+            BigInteger[] p = ZPoly.multiply(num, o.num);
+            if (p.length == 0) {
+                return field.zero;
+            }
+            BigInteger[] r = new BigInteger[d];
+            boolean scaled = !field.redDen.equals(BigInteger.ONE);
+            for (int j = 0; j < d; j++) {
+                BigInteger c = j < p.length ? p[j] : BigInteger.ZERO;
+                r[j] = scaled ? c.multiply(field.redDen) : c;
+            }
+            for (int k = d; k < p.length; k++) {
+                BigInteger t = p[k];
+                if (t.signum() == 0) {
+                    continue;
+                }
+                BigInteger[] row = field.red[k - d];
+                for (int j = 0; j < d; j++) {
+                    if (row[j].signum() != 0) {
+                        r[j] = r[j].add(t.multiply(row[j]));
+                    }
+                }
+            }
+            BigInteger nd = den.multiply(o.den);
+            if (scaled) {
+                nd = nd.multiply(field.redDen);
+            }
+            return field.make(r, nd);
+        }
+
+        /**
+         * @return {@code 1/this}, computed by the Cayley–Hamilton theorem from the characteristic
+         *     polynomial {@code X^d + c_{d-1} X^{d-1} + ... + c_0}: {@code this^{-1} = -(this^{d-1} +
+         *     c_{d-1} this^{d-2} + ... + c_1) / c_0}
+         * @throws ArithmeticException if the norm is zero (this is zero, or {@code f} is reducible)
+         */
+        public Element inverse() {
+            if (isZero()) {
+                throw new ArithmeticException("inverse of zero in " + field.name());
+            }
+            QPoly cp = charPoly();
+            int d = num.length;
+            Rational c0 = cp.coefficient(0);
+            if (c0.signum() == 0) {
+                throw new ArithmeticException(
+                        "element " + this + " has norm 0 in " + field.name() + ": the defining polynomial is reducible");
+            }
+            Element b = field.one;
+            for (int k = d - 1; k >= 1; k--) {
+                b = b.multiply(this).add(field.fromRational(cp.coefficient(k)));
+            }
+            return b.scale(c0.inverse().negate());
+        }
+
+        /** @return {@code q * this} */
+        public Element scale(Rational q) {
+            BigInteger[] r = new BigInteger[num.length];
+            for (int j = 0; j < r.length; j++) {
+                r[j] = num[j].multiply(q.num());
+            }
+            return field.make(r, den.multiply(q.den()));
+        }
+
+        /**
+         * @return {@code this^e}; negative {@code e} means a power of the inverse
+         * @throws ArithmeticException for a negative power of a non-invertible element
+         */
+        public Element pow(int e) {
+            if (e < 0) {
+                return inverse().pow(-(long) e);
+            }
+            return pow((long) e);
+        }
+
+        private Element pow(long e) {
+            Element result = field.one;
+            Element base = this;
+            while (e > 0) {
+                if ((e & 1) != 0) {
+                    result = result.multiply(base);
+                }
+                e >>= 1;
+                if (e > 0) {
+                    base = base.multiply(base);
+                }
+            }
+            return result;
+        }
+
+        /** @return the trace {@code Tr_{K/Q}}: the trace of multiplication by this element */
+        public Rational trace() {
+            BigInteger acc = BigInteger.ZERO;
+            BigInteger accDen = BigInteger.ONE;
+            Rational sum = Rational.ZERO;
+            for (int j = 0; j < num.length; j++) {
+                if (num[j].signum() == 0) {
+                    continue;
+                }
+                Rational t = field.traceOfPower[j];
+                if (t.isInteger()) {
+                    acc = acc.add(num[j].multiply(t.num()));
+                } else {
+                    sum = sum.add(Rational.of(num[j]).multiply(t));
+                }
+            }
+            return sum.add(Rational.of(acc)).divide(Rational.of(den));
+        }
+
+        /** @return the norm {@code N_{K/Q}}: the determinant of multiplication by this element */
+        public Rational norm() {
+            Rational c0 = charPoly().coefficient(0);
+            return num.length % 2 == 0 ? c0 : c0.negate();
+        }
+
+        /**
+         * @return the characteristic polynomial of multiplication by this element on {@code K}
+         *     (monic, of degree {@code d}). Computed from the power sums {@code p_k = Tr(a^k)}, {@code
+         *     1 <= k <= d}, by Newton's identities {@code k e_k = sum_{i=1}^{k} (-1)^(i-1) e_{k-i}
+         *     p_i} (valid in characteristic 0; see Cohen, GTM 138, §4.3): {@code d - 1}
+         *     multiplications in {@code K} and {@code O(d^2)} rational operations.
+         */
+        public QPoly charPoly() {
+            QPoly cp = charPoly;
+            if (cp == null) {
+                cp = newtonCharPoly();
+                charPoly = cp;
+            }
+            return cp;
+        }
+
+        private QPoly newtonCharPoly() {
+            int d = num.length;
+            Rational[] ps = new Rational[d + 1];
+            Element power = this;
+            for (int k = 1; k <= d; k++) {
+                ps[k] = power.trace();
+                if (k < d) {
+                    power = power.multiply(this);
+                }
+            }
+            Rational[] e = new Rational[d + 1];
+            e[0] = Rational.ONE;
+            for (int k = 1; k <= d; k++) {
+                Rational acc = Rational.ZERO;
+                for (int i = 1; i <= k; i++) {
+                    Rational t = e[k - i].multiply(ps[i]);
+                    acc = (i % 2 == 1) ? acc.add(t) : acc.subtract(t);
+                }
+                e[k] = acc.divide(Rational.of(k));
+            }
+            // charpoly = sum_k (-1)^k e_k X^(d-k)
+            Rational[] c = new Rational[d + 1];
+            for (int k = 0; k <= d; k++) {
+                c[d - k] = k % 2 == 0 ? e[k] : e[k].negate();
+            }
+            return QPoly.of(c);
+        }
+
+        /**
+         * @return the minimal polynomial over Q: the squarefree part of the characteristic
+         *     polynomial, made monic. Correct when {@code f} is irreducible (then the characteristic
+         *     polynomial is a power of the minimal polynomial).
+         */
+        public QPoly minPoly() {
+            return charPoly().squarefreePart().monic();
+        }
+
+        /** @return whether this element lies in Q (all coordinates beyond the first are zero) */
+        public boolean isRational() {
+            for (int j = 1; j < num.length; j++) {
+                if (num[j].signum() != 0) {
+                    return false;
+                }
+            }
+            return true;
+        }
+
+        /**
+         * @return whether the characteristic polynomial has integer coefficients (equivalently, for
+         *     a number field, whether this element is an algebraic integer)
+         */
+        public boolean isAlgebraicInteger() {
+            if (den.equals(BigInteger.ONE) && field.fDen.equals(BigInteger.ONE)) {
+                return true;
+            }
+            return charPoly().hasIntegerCoefficients();
+        }
+
+        @Override
+        public boolean equals(Object o) {
+            return o instanceof Element e && field.equals(e.field) && den.equals(e.den) && Arrays.equals(num, e.num);
+        }
+
+        @Override
+        public int hashCode() {
+            return 31 * Arrays.hashCode(num) + den.hashCode();
+        }
+
+        /** @return the representative as a polynomial in {@code x}, e.g. {@code "1/2*x + 1/2"} */
+        @Override
+        public String toString() {
+            return asPolynomial().toString();
+        }
+    }
+
+    private Element makeIntegral(BigInteger[] n) {
+        return make(n, BigInteger.ONE);
+    }
+}
