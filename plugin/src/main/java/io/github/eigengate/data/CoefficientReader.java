@@ -148,6 +148,11 @@ public final class CoefficientReader {
                 problems.error(row.at("value"), subject, expectation(form), "an empty cell", "a_" + n + " is missing");
                 return;
             }
+            if (text.startsWith("[") && !text.endsWith("]") && row.size() > row.width()) {
+                problems.error(row.at("value"), subject, expectation(form), text,
+                        "the vector was split at its commas: quote the cell, e.g. \"[1, 2]\"");
+                return;
+            }
             Object parsed = parser.parse(text, form);
             if (parsed instanceof String problem) {
                 problems.error(row.at("value"), subject, expectation(form), text, problem);

@@ -19,6 +19,7 @@ import java.io.InputStreamReader;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
+import org.apache.commons.csv.DuplicateHeaderMode;
 
 /**
  * Reads one CSV table of the data contract: UTF-8, RFC 4180, a header row, {@code #} comment lines, columns in any
@@ -33,6 +34,7 @@ public final class CsvTable {
             .setCommentMarker('#')
             .setIgnoreEmptyLines(true)
             .setIgnoreSurroundingSpaces(true)
+            .setDuplicateHeaderMode(DuplicateHeaderMode.DISALLOW)
             .get();
 
     private final Path path;

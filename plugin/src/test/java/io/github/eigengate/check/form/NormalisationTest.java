@@ -27,7 +27,7 @@ class NormalisationTest {
 
     @Test
     void normalisedFormsPass() {
-        assertEquals(List.of(), run("form,n,value\ndelta,1,1\ndelta,2,-24\nphi,1,[1,0]\nphi,2,-x\n"));
+        assertEquals(List.of(), run("form,n,value\ndelta,1,1\ndelta,2,-24\nphi,1,\"[1,0]\"\nphi,2,-x\n"));
     }
 
     @Test
