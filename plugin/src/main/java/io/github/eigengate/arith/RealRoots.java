@@ -1,0 +1,132 @@
+package io.github.eigengate.arith;
+
+import java.math.BigInteger;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * Counting real roots of rational polynomials exactly, with Sturm sequences.
+ *
+ * <p>For a squarefree polynomial {@code g} let {@code g_0 = g}, {@code g_1 = g'} and {@code g_{i+1}
+ * = -rem(g_{i-1}, g_i)} until the remainder vanishes, and let {@code V(t)} be the number of sign
+ * changes (zeros skipped) in {@code g_0(t), g_1(t), ...}. Sturm's theorem (Basu–Pollack–Roy,
+ * <i>Algorithms in Real Algebraic Geometry</i>, §2.2.2, Thm. 2.50) says that for {@code a < b} the
+ * number of roots of {@code g} in the half-open interval {@code (a, b]} is {@code V(a) - V(b)}.
+ * Each {@code g_i} is replaced by a positive multiple with integer coefficients (pseudo-remainders
+ * with positive multipliers, then division by the positive content), which changes no sign.
+ * Everything is evaluated exactly at rational points; nothing is decided in floating point.
+ */
+public final class RealRoots {
+    private RealRoots() {}
+
+    /**
+     * @return the number of distinct real roots of {@code f}; 0 for a nonzero constant
+     * @throws IllegalArgumentException if {@code f} is zero
+     */
+    public static int countDistinctRealRoots(QPoly f) {
+        List<BigInteger[]> s = sturmSequence(f);
+        return variationsAtInfinity(s, false) - variationsAtInfinity(s, true);
+    }
+
+    /**
+     * @return the number of distinct real roots of {@code f} in the closed interval {@code [lo,
+     *     hi]} (roots exactly at an end count)
+     * @throws IllegalArgumentException if {@code f} is zero or {@code lo > hi}
+     */
+    public static int countDistinctRootsIn(QPoly f, Rational lo, Rational hi) {
+        if (lo.compareTo(hi) > 0) {
+            throw new IllegalArgumentException("empty interval [" + lo + ", " + hi + "]");
+        }
+        List<BigInteger[]> s = sturmSequence(f);
+        int atLo = ZPoly.signAt(s.get(0), lo.num(), lo.den()) == 0 ? 1 : 0;
+        if (lo.equals(hi)) {
+            return atLo;
+        }
+        return variations(s, lo) - variations(s, hi) + atLo;
+    }
+
+    /**
+     * @return whether every complex root of {@code f} is real and lies in {@code [lo, hi]}
+     * @throws IllegalArgumentException if {@code f} is constant (or zero) or {@code lo > hi}
+     */
+    public static boolean allRootsRealIn(QPoly f, Rational lo, Rational hi) {
+        if (f.degree() < 1) {
+            throw new IllegalArgumentException("polynomial of degree >= 1 required, got " + f);
+        }
+        int distinct = f.squarefreePart().degree();
+        return countDistinctRootsIn(f, lo, hi) == distinct;
+    }
+
+    /** The Sturm sequence of the squarefree part of {@code f}, as positive integer multiples. */
+    static List<BigInteger[]> sturmSequence(QPoly f) {
+        if (f.isZero()) {
+            throw new IllegalArgumentException("the zero polynomial has infinitely many roots");
+        }
+        BigInteger[] g = ZPoly.primitiveOf(f.squarefreePart().coeffArray());
+        List<BigInteger[]> s = new ArrayList<>();
+        s.add(g);
+        BigInteger[] prev = g;
+        BigInteger[] cur = positiveContentFree(ZPoly.derivative(g));
+        while (cur.length > 0) {
+            s.add(cur);
+            BigInteger[] next = positiveContentFree(negate(ZPoly.pseudoRemainder(prev, cur)));
+            prev = cur;
+            cur = next;
+        }
+        return s;
+    }
+
+    private static BigInteger[] negate(BigInteger[] a) {
+        BigInteger[] r = new BigInteger[a.length];
+        for (int k = 0; k < a.length; k++) {
+            r[k] = a[k].negate();
+        }
+        return r;
+    }
+
+    private static BigInteger[] positiveContentFree(BigInteger[] a) {
+        if (a.length == 0) {
+            return a;
+        }
+        BigInteger g = ZPoly.content(a);
+        if (g.equals(BigInteger.ONE)) {
+            return a;
+        }
+        BigInteger[] r = new BigInteger[a.length];
+        for (int k = 0; k < a.length; k++) {
+            r[k] = a[k].divide(g);
+        }
+        return r;
+    }
+
+    private static int variations(List<BigInteger[]> s, Rational t) {
+        int count = 0;
+        int last = 0;
+        for (BigInteger[] p : s) {
+            int sg = ZPoly.signAt(p, t.num(), t.den());
+            if (sg != 0) {
+                if (last != 0 && sg != last) {
+                    count++;
+                }
+                last = sg;
+            }
+        }
+        return count;
+    }
+
+    private static int variationsAtInfinity(List<BigInteger[]> s, boolean plus) {
+        int count = 0;
+        int last = 0;
+        for (BigInteger[] p : s) {
+            int sg = ZPoly.lc(p).signum();
+            if (!plus && (p.length - 1) % 2 == 1) {
+                sg = -sg;
+            }
+            if (last != 0 && sg != last) {
+                count++;
+            }
+            last = sg;
+        }
+        return count;
+    }
+}
