@@ -1,7 +1,11 @@
 package io.github.eigengate.engine;
 
 import io.github.eigengate.check.Check;
+import io.github.eigengate.check.form.FieldSanity;
+import io.github.eigengate.check.form.HeckeRelations;
+import io.github.eigengate.check.form.LevelPrimes;
 import io.github.eigengate.check.form.Normalisation;
+import io.github.eigengate.check.form.RamanujanBound;
 import java.util.List;
 
 /** The checks Eigengate runs, in report order. A new check is added here (see DEVELOPERS.md). */
@@ -12,6 +16,10 @@ public final class Checks {
 
     public static List<Check> all(Settings settings) {
         return List.of(
-                new Normalisation());
+                new Normalisation(),
+                new FieldSanity(),
+                new HeckeRelations(),
+                new RamanujanBound(),
+                new LevelPrimes());
     }
 }
