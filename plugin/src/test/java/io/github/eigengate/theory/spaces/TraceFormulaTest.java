@@ -47,6 +47,26 @@ class TraceFormulaTest {
         assertTrue(checked > 15_000, "checked " + checked);
     }
 
+    /**
+     * Fixture traces1001.csv: Tr T_p on S_2(Γ0(1001)) and on the new subspace for all primes p ≤ 10^4,
+     * from PARI/GP mftraceform (command in the fixture header). Exercises 4p − t² up to 4·10^4.
+     */
+    @Test
+    void matchesPariAtLevel1001ForPrimesUpTo10000() {
+        TraceFormula tf = TraceFormula.forLevel(1001, HurwitzClassNumbers.upTo(40_000));
+        List<String[]> rows = Fixtures.rows("traces1001.csv");
+        assertEquals(1229, rows.size());
+        for (String[] r : rows) {
+            long p = Long.parseLong(r[0]);
+            assertEquals(new BigInteger(r[1]), tf.trace(2, p), "Tr T_" + p + " on S_2(1001)");
+            if (1001 % p != 0) {
+                assertEquals(new BigInteger(r[2]), tf.newTrace(2, p), "Tr T_" + p + " on S_2^new(1001)");
+            } else {
+                assertEquals(2, r.length);
+            }
+        }
+    }
+
     /** Ramanujan's τ(n) = Tr(T_n | S_12(1)), OEIS A000594 (first values typed from memory). */
     @Test
     void ramanujanTau() {
