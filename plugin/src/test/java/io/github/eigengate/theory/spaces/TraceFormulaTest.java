@@ -48,6 +48,33 @@ class TraceFormulaTest {
     }
 
     /**
+     * Fixture traces-wide.csv: PARI/GP mftraceform coefficients a_1..a_40 for every N ≤ 200 and the levels
+     * 243, 343, 500, 512, 625, 648, 729, 1024, weights 2, 4, 6 (gp script in the fixture header).
+     */
+    @Test
+    void matchesPariForAllLevelsUpTo200() {
+        List<String[]> rows = Fixtures.rows("traces-wide.csv");
+        assertEquals(208 * 3 * 2, rows.size());
+        HurwitzClassNumbers small = HurwitzClassNumbers.upTo(160);
+        for (String[] r : rows) {
+            int level = Integer.parseInt(r[0]);
+            int k = Integer.parseInt(r[1]);
+            boolean full = r[2].equals("1");
+            String[] coeffs = r[3].split(" ");
+            assertEquals(40, coeffs.length);
+            TraceFormula tf = TraceFormula.forLevel(level, small);
+            for (int n = 1; n <= 40; n++) {
+                String what = "Tr T_" + n + " on S_" + k + (full ? "" : "^new") + "(" + level + ")";
+                if (full) {
+                    assertEquals(new BigInteger(coeffs[n - 1]), tf.trace(k, n), what);
+                } else if (Arith.gcd(n, level) == 1) {
+                    assertEquals(new BigInteger(coeffs[n - 1]), tf.newTrace(k, n), what);
+                }
+            }
+        }
+    }
+
+    /**
      * Fixture traces1001.csv: Tr T_p on S_2(Γ0(1001)) and on the new subspace for all primes p ≤ 10^4,
      * from PARI/GP mftraceform (command in the fixture header). Exercises 4p − t² up to 4·10^4.
      */
