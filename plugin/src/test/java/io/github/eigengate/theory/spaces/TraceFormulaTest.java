@@ -75,6 +75,32 @@ class TraceFormulaTest {
     }
 
     /**
+     * Fixture traces-large.csv: PARI/GP mftraceform coefficients a_1..a_30 at levels 65537 and 2·65537,
+     * weight 2 (gp script in the fixture header); the prime 65537 is above the quadratic-residue table limit,
+     * so Legendre symbols go through the Jacobi-symbol algorithm.
+     */
+    @Test
+    void matchesPariForLevelsWithALargePrime() {
+        HurwitzClassNumbers small = HurwitzClassNumbers.upTo(120);
+        List<String[]> rows = Fixtures.rows("traces-large.csv");
+        assertEquals(4, rows.size());
+        for (String[] r : rows) {
+            int level = Integer.parseInt(r[0]);
+            boolean full = r[1].equals("1");
+            String[] coeffs = r[2].split(" ");
+            TraceFormula tf = TraceFormula.forLevel(level, small);
+            for (int n = 1; n <= 30; n++) {
+                String what = "Tr T_" + n + " on S_2" + (full ? "" : "^new") + "(" + level + ")";
+                if (full) {
+                    assertEquals(new BigInteger(coeffs[n - 1]), tf.trace(2, n), what);
+                } else if (Arith.gcd(n, level) == 1) {
+                    assertEquals(new BigInteger(coeffs[n - 1]), tf.newTrace(2, n), what);
+                }
+            }
+        }
+    }
+
+    /**
      * Fixture traces1001.csv: Tr T_p on S_2(Γ0(1001)) and on the new subspace for all primes p ≤ 10^4,
      * from PARI/GP mftraceform (command in the fixture header). Exercises 4p − t² up to 4·10^4.
      */
