@@ -27,6 +27,9 @@ public final class TraceBench {
                 : Arrays.stream(args).mapToInt(Integer::parseInt).toArray();
         long[] primes = primesUpTo(PRIME_BOUND);
 
+        long coldStart = System.nanoTime();
+        HurwitzClassNumbers.upTo(4L * PRIME_BOUND);
+        long coldTable = System.nanoTime() - coldStart;
         for (int i = 0; i < 3; i++) {
             HurwitzClassNumbers.upTo(4L * PRIME_BOUND);
         }
@@ -37,8 +40,8 @@ public final class TraceBench {
             table = HurwitzClassNumbers.upTo(4L * PRIME_BOUND);
             tableTimes[r] = System.nanoTime() - start;
         }
-        System.out.printf("Hurwitz class numbers H(n), n <= %d: median %.1f ms%n", 4 * PRIME_BOUND,
-                median(tableTimes) / 1e6);
+        System.out.printf("Hurwitz class numbers H(n), n <= %d: median %.1f ms, first run %.1f ms%n",
+                4 * PRIME_BOUND, median(tableTimes) / 1e6, coldTable / 1e6);
 
         for (int level : levels) {
             HurwitzClassNumbers shared = table;
@@ -69,13 +72,10 @@ public final class TraceBench {
                 }
                 return sum;
             });
-            System.out.printf("N = %d, k = 2, Tr T_p on S_2(N), %d primes p <= %d: median %.1f ms (sum %s)%n",
-                    level, primes.length, PRIME_BOUND, full.medianNanos / 1e6, full.checksum);
-            System.out.printf("N = %d, k = 2, Tr T_p on S_2^new(N), %d primes p <= %d, p coprime to N: "
-                    + "median %.1f ms (sum %s)%n", level, coprime, PRIME_BOUND, fresh.medianNanos / 1e6,
-                    fresh.checksum);
-            System.out.printf("N = %d, k = 2, Tr T_n on S_2(N), all n <= %d: median %.1f ms (sum %s)%n",
-                    level, PRIME_BOUND, all.medianNanos / 1e6, all.checksum);
+            report(level + ", Tr T_p on S_2(N), " + primes.length + " primes p <= " + PRIME_BOUND, full);
+            report(level + ", Tr T_p on S_2^new(N), " + coprime + " primes p <= " + PRIME_BOUND + " coprime to N",
+                    fresh);
+            report(level + ", Tr T_n on S_2(N), all n <= " + PRIME_BOUND, all);
         }
 
         HurwitzClassNumbers small = HurwitzClassNumbers.upTo(400);
@@ -87,19 +87,25 @@ public final class TraceBench {
             }
             return sum;
         });
-        System.out.printf("N = 1, k = 12, tau(n) for n <= 100: median %.2f ms (sum %s)%n",
-                delta.medianNanos / 1e6, delta.checksum);
+        report("1, tau(n) = Tr T_n on S_12(1), n <= 100", delta);
+    }
+
+    private static void report(String what, Result r) {
+        System.out.printf("N = %s: median %.1f ms, first run %.1f ms (checksum = sum of traces: %s)%n", what,
+                r.medianNanos / 1e6, r.coldNanos / 1e6, r.checksum);
     }
 
     private interface Job {
         BigInteger run();
     }
 
-    private record Result(long medianNanos, BigInteger checksum) {
+    private record Result(long medianNanos, long coldNanos, BigInteger checksum) {
     }
 
     private static Result time(Job job) {
-        BigInteger check = job.run(); // warm-up
+        long coldStart = System.nanoTime();
+        BigInteger check = job.run(); // first run, before JIT warm-up
+        long cold = System.nanoTime() - coldStart;
         for (int i = 0; i < 2; i++) {
             job.run();
         }
@@ -112,7 +118,7 @@ public final class TraceBench {
                 throw new IllegalStateException("non-deterministic result");
             }
         }
-        return new Result(median(times), check);
+        return new Result(median(times), cold, check);
     }
 
     private static long median(long[] xs) {
