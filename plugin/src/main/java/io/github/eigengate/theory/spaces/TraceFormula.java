@@ -44,7 +44,9 @@ import java.math.BigInteger;
  * of f, so Tr(T_n | S_k(N)) = Σ_{M | N} σ0(N/M) Tr(T_n | S_k^new(M)); inverting with β = μ * μ (the Dirichlet
  * inverse of σ0; G. Martin, J. Number Theory 112 (2005), §1) gives
  * Tr(T_n | S_k^new(N)) = Σ_{M | N} β(N/M) Tr(T_n | S_k(M)). For (n, N) &gt; 1 this fails (U_p does not act
- * on the oldforms by the eigenvalue of f), so {@link #newTrace} rejects such n.
+ * on the oldforms by the eigenvalue of f), so {@link #newTrace} rejects such n. The β-weighted sum is not
+ * evaluated level by level: in A2 the sum over M of β(N/M)·μ_M factorises over the primes of N (both factors
+ * are multiplicative), so one pass over t serves all divisor levels.
  *
  * <p>Instances are immutable and thread-safe.
  */
@@ -148,6 +150,16 @@ public final class TraceFormula {
             return BigInteger.ZERO;
         }
         long[] nDivs = Arith.divisors(Arith.factor(n));
+        return exactDiv24(newTraceTimes24(weight, n, nDivs), level.n, weight, n);
+    }
+
+    /**
+     * The same as {@link #newTrace} for (n, N) = 1 and even k, evaluated naively as
+     * Σ_{M | N} β(N/M) Tr(T_n | S_k(M)) with one full trace formula per divisor M; kept to cross-check the
+     * factorised evaluation in tests.
+     */
+    BigInteger newTraceBySummingLevels(int weight, long n) {
+        long[] nDivs = Arith.divisors(Arith.factor(n));
         BigInteger sum = BigInteger.ZERO;
         for (int i = 0; i < divisorLevels.length; i++) {
             Level m = divisorLevels[i];
@@ -201,6 +213,48 @@ public final class TraceFormula {
                 if (Arith.gcd(lv.n, n / d) == 1) {
                     a4 += 24 * d;
                 }
+            }
+        }
+        try {
+            return BigInteger.valueOf(combineLong(k, n, s, classSums, nDivs, a3, a1Base, a4));
+        } catch (ArithmeticException overflow) {
+            return combineBig(k, n, s, classSums, nDivs, a3, a1Base, a4);
+        }
+    }
+
+    /**
+     * 24·Σ_{M | N} β(N/M) Tr(T_n | S_k(M)) for (n, N) = 1 and even k. A1, A3 and A4 are cheap and summed
+     * level by level (with (n, N) = 1 their coprimality conditions on s, d, n/d hold automatically). In A2 the
+     * β-weighted sum of μ_M(t, f, n) over M | N factorises over the primes of N, because β and the local
+     * counts are multiplicative: Σ_M β(N/M) μ_M = ∏_{p^a ‖ N} Σ_{j = 0}^{a} β(p^{a−j}) μ_{p^j}, μ_1 = 1. So one
+     * pass over t serves all divisor levels.
+     */
+    private BigInteger newTraceTimes24(int k, long n, long[] nDivs) {
+        int tMax = (int) Arith.isqrt(4 * n - 1);
+        long[] classSums = new long[tMax + 1];
+        for (int t = 0; t <= tMax; t++) {
+            classSums[t] = newClassSum(t, n);
+        }
+        long[] a3 = new long[nDivs.length];
+        long a1Base = 0;
+        long a4Weight = 0;
+        for (int j = 0; j < divisorLevels.length; j++) {
+            Level m = divisorLevels[j];
+            long b = divisorBetas[j];
+            for (int i = 0; i < nDivs.length; i++) {
+                a3[i] += b * m.a3Inner(nDivs[i], n / nDivs[i]);
+            }
+            a1Base += b * 2L * (k - 1) * m.psi;
+            a4Weight += b;
+        }
+        long s = Arith.isqrt(n);
+        if (s * s != n) {
+            a1Base = 0;
+        }
+        long a4 = 0;
+        if (k == 2 && a4Weight != 0) {
+            for (long d : nDivs) {
+                a4 += 24 * d * a4Weight;
             }
         }
         try {
@@ -302,6 +356,31 @@ public final class TraceFormula {
         long sum = 0;
         for (long f : Arith.divisors(Arith.factor(cond))) {
             long mu = lv.mu(t, n, disc, f);
+            if (mu != 0) {
+                sum += mu * table.primitiveTimes12(m / (f * f));
+            }
+        }
+        return sum;
+    }
+
+    /** Σ_f 12h_w((t² − 4n)/f²) · Σ_{M | N} β(N/M) μ_M(t, f, n), for the level N of this instance. */
+    private long newClassSum(long t, long n) {
+        long m = 4 * n - t * t;
+        if (level.n == 1) {
+            return table.times12(m);
+        }
+        long disc = -m;
+        long cond = table.conductor(m);
+        if (cond == 0) {
+            return 0;
+        }
+        if (Arith.gcd(cond, level.n) == 1) {
+            long mu = level.betaWeightedMu(t, n, disc, 1);
+            return mu == 0 ? 0 : mu * table.times12(m);
+        }
+        long sum = 0;
+        for (long f : Arith.divisors(Arith.factor(cond))) {
+            long mu = level.betaWeightedMu(t, n, disc, f);
             if (mu != 0) {
                 sum += mu * table.primitiveTimes12(m / (f * f));
             }
@@ -448,23 +527,48 @@ public final class TraceFormula {
         long mu(long t, long nn, long disc, long f) {
             long r = 1;
             for (int i = 0; i < primes.length; i++) {
-                long p = primes[i];
-                int a = exps[i];
-                int b = 0;
-                if (f != 1) {
-                    b = Math.min(a, Arith.valuation(f, p));
-                }
-                long c = localCount(p, a, b, t, nn, disc, qr[i]);
+                long c = localMu(i, exps[i], t, nn, disc, f);
                 if (c == 0) {
                     return 0;
-                }
-                if (b > 0) {
-                    // ψ(p^a)/ψ(p^{a−b})
-                    c *= (b == a) ? Arith.powExact(p, a - 1) * (p + 1) : Arith.powExact(p, b);
                 }
                 r *= c;
             }
             return r;
+        }
+
+        /**
+         * Σ_{M | N} β(N/M) μ_M(t, f, n) = ∏_{p^a ‖ N} (μ_{p^a} − 2 μ_{p^{a−1}} + μ_{p^{a−2}}), terms with
+         * negative exponent omitted and μ_{p^0} = 1 (β(1) = 1, β(p) = −2, β(p²) = 1).
+         */
+        long betaWeightedMu(long t, long nn, long disc, long f) {
+            long r = 1;
+            for (int i = 0; i < primes.length; i++) {
+                int a = exps[i];
+                long c = localMu(i, a, t, nn, disc, f);
+                if (a >= 1) {
+                    c -= 2 * (a == 1 ? 1 : localMu(i, a - 1, t, nn, disc, f));
+                }
+                if (a >= 2) {
+                    c += (a == 2) ? 1 : localMu(i, a - 2, t, nn, disc, f);
+                }
+                if (c == 0) {
+                    return 0;
+                }
+                r *= c;
+            }
+            return r;
+        }
+
+        /** The p-part of μ at level p^a (a ≥ 1) for the i-th prime p of this level. */
+        private long localMu(int i, int a, long t, long nn, long disc, long f) {
+            long p = primes[i];
+            int b = (f == 1) ? 0 : Math.min(a, Arith.valuation(f, p));
+            long c = localCount(p, a, b, t, nn, disc, qr[i]);
+            if (c != 0 && b > 0) {
+                // ψ(p^a)/ψ(p^{a−b})
+                c *= (b == a) ? Arith.powExact(p, a - 1) * (p + 1) : Arith.powExact(p, b);
+            }
+            return c;
         }
     }
 }

@@ -159,6 +159,28 @@ class TraceFormulaTest {
         }
     }
 
+    /** The factorised new-space evaluation equals the naive β-weighted sum of full traces (fixed seed). */
+    @Test
+    void factorisedNewTraceEqualsLevelByLevelSum() {
+        Random rnd = new Random(99L);
+        HurwitzClassNumbers t = HurwitzClassNumbers.upTo(800);
+        for (int i = 0; i < 300; i++) {
+            int level = 1 + rnd.nextInt(3000);
+            if (i % 3 == 0) {
+                level = 4 * 9 * 25 * (1 + rnd.nextInt(10)); // squares of small primes
+            }
+            TraceFormula tf = TraceFormula.forLevel(level, t);
+            int k = new int[] {2, 4, 12, 40}[rnd.nextInt(4)];
+            for (int j = 0; j < 5; j++) {
+                long n = 1 + rnd.nextInt(200);
+                if (Arith.gcd(n, level) == 1) {
+                    assertEquals(tf.newTraceBySummingLevels(k, n), tf.newTrace(k, n),
+                            "N=" + level + " k=" + k + " n=" + n);
+                }
+            }
+        }
+    }
+
     /** Large weights overflow long and take the BigInteger path; level 1, k = 30 is in the PARI fixture too. */
     @Test
     void largeWeightUsesExactBigIntegers() {
