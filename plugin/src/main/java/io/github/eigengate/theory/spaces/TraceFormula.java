@@ -9,7 +9,7 @@ import java.math.BigInteger;
  * <h2>The formula</h2>
  * We use Cohen's form of the trace formula, valid for every n ≥ 1 including (n, N) &gt; 1
  * (H. Cohen, <i>Trace des opérateurs de Hecke sur Γ0(N)</i>, Séminaire de Théorie des Nombres de
- * Bordeaux 1976–1977, exposé no. 4, Théorème 2; restated in H. Cohen and F. Strömberg, <i>Modern Analytic
+ * Bordeaux 1976–1977, exposé no. 4, main theorem; restated in H. Cohen and F. Strömberg, <i>Modern Analytic
  * Theory of Modular Forms</i>, AMS GSM 179, §12.4), specialised to the trivial character χ = χ_0 mod N.
  * For N = 1 it is Zagier's formula (appendix to S. Lang, <i>Introduction to Modular Forms</i>,
  * Grundlehren 222). Tr(T_n | S_k(Γ0(N))) = A1 + A2 + A3 + A4 where

@@ -164,7 +164,7 @@ class TraceFormulaTest {
     void factorisedNewTraceEqualsLevelByLevelSum() {
         Random rnd = new Random(99L);
         HurwitzClassNumbers t = HurwitzClassNumbers.upTo(800);
-        for (int i = 0; i < 300; i++) {
+        for (int i = 0; i < 200; i++) {
             int level = 1 + rnd.nextInt(3000);
             if (i % 3 == 0) {
                 level = 4 * 9 * 25 * (1 + rnd.nextInt(10)); // squares of small primes
