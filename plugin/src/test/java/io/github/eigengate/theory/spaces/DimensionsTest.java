@@ -1,0 +1,88 @@
+package io.github.eigengate.theory.spaces;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import org.junit.jupiter.api.Test;
+
+class DimensionsTest {
+
+    /** Fixture dimensions.csv: PARI/GP mfdim([N,k,1],1) and mfdim([N,k,1],0), N ≤ 300, k = 2..14 even. */
+    @Test
+    void matchesPariForAllLevelsUpTo300() {
+        List<String[]> rows = Fixtures.rows("dimensions.csv");
+        assertEquals(300 * 7, rows.size());
+        for (String[] r : rows) {
+            int n = Integer.parseInt(r[0]);
+            int k = Integer.parseInt(r[1]);
+            assertEquals(Long.parseLong(r[2]), Dimensions.cuspForms(n, k), "dim S_" + k + "(" + n + ")");
+            assertEquals(Long.parseLong(r[3]), Dimensions.newforms(n, k), "dim S_" + k + "^new(" + n + ")");
+        }
+    }
+
+    /** Textbook values, from memory: Diamond–Shurman §3.9 / Stein, Modular Forms: A Computational Approach. */
+    @Test
+    void textbookValues() {
+        // dim S_12(SL_2(Z)) = 1, spanned by Δ (Diamond–Shurman §3.9; from memory)
+        assertEquals(1, Dimensions.cuspForms(1, 12));
+        // S_k(SL_2(Z)) = 0 for k < 12 and k = 14 (from memory)
+        for (int k = 2; k <= 10; k += 2) {
+            assertEquals(0, Dimensions.cuspForms(1, k));
+        }
+        assertEquals(0, Dimensions.cuspForms(1, 14));
+        // dim S_k(SL_2(Z)) = ⌊k/12⌋ − 1 if k ≡ 2 mod 12, else ⌊k/12⌋ (Diamond–Shurman §3.5; from memory)
+        for (int k = 4; k <= 200; k += 2) {
+            long expected = (k % 12 == 2) ? k / 12 - 1 : k / 12;
+            assertEquals(expected, Dimensions.cuspForms(1, k), "k = " + k);
+        }
+        // X0(11) has genus 1, X0(37) and X0(23) genus 2, X0(N) genus 0 for N ≤ 10 (from memory)
+        assertEquals(1, Dimensions.cuspForms(11, 2));
+        assertEquals(1, Dimensions.genus(11));
+        assertEquals(2, Dimensions.genus(23));
+        assertEquals(2, Dimensions.genus(37));
+        for (int n = 1; n <= 10; n++) {
+            assertEquals(0, Dimensions.genus(n), "genus X0(" + n + ")");
+        }
+        // dim S_2(Γ0(389)) = 32, dim S_2^new(Γ0(389)) = 32 (prime level; from memory)
+        assertEquals(32, Dimensions.cuspForms(389, 2));
+        assertEquals(32, Dimensions.newforms(389, 2));
+    }
+
+    @Test
+    void oddWeightGivesZero() {
+        for (int n = 1; n <= 50; n++) {
+            for (int k = 3; k <= 15; k += 2) {
+                assertEquals(0, Dimensions.cuspForms(n, k));
+                assertEquals(0, Dimensions.newforms(n, k));
+            }
+        }
+    }
+
+    /** dim S_k(N) = Σ_{M | N} σ0(N/M) dim S_k^new(M) (Atkin–Lehner; the relation inverted by newforms). */
+    @Test
+    void oldformMultiplicityRelationHolds() {
+        for (int n = 1; n <= 600; n++) {
+            for (int k = 2; k <= 8; k += 2) {
+                long sum = 0;
+                for (long m : Arith.divisors(Arith.factor(n))) {
+                    sum += Arith.sigma0(n / m) * Dimensions.newforms((int) m, k);
+                }
+                assertEquals(Dimensions.cuspForms(n, k), sum, "N = " + n + ", k = " + k);
+                assertTrue(Dimensions.newforms(n, k) >= 0);
+            }
+        }
+    }
+
+    @Test
+    void rejectsBadArguments() {
+        IllegalArgumentException w1 = assertThrows(IllegalArgumentException.class, () -> Dimensions.cuspForms(11, 1));
+        assertTrue(w1.getMessage().contains("weight 1"));
+        assertThrows(IllegalArgumentException.class, () -> Dimensions.newforms(11, 1));
+        assertThrows(IllegalArgumentException.class, () -> Dimensions.cuspForms(11, 0));
+        assertThrows(IllegalArgumentException.class, () -> Dimensions.cuspForms(0, 2));
+        assertThrows(IllegalArgumentException.class, () -> Dimensions.newforms(-5, 2));
+        assertThrows(IllegalArgumentException.class, () -> Dimensions.genus(0));
+    }
+}
