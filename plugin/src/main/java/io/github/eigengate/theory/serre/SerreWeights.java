@@ -98,9 +98,10 @@ public final class SerreWeights {
      *       (the ordinary crystalline lift, sub with Hodge–Tate weight r + 1). When a − b ≡ 1, both r = 0
      *       and r = p − 1 solve this; r = 0 (Hodge–Tate weights {0, 1}, finite flat) needs ρ̄ peu
      *       ramifié, so TRES keeps only r = p − 1.</li>
-     *   <li>the other ordering (sub, quotient) = (ω^s, ω^{s+r+1}) only has split reductions (the
-     *       crystalline extensions of ε^{r+1} by an unramified character split for r + 1 &gt; 0), so it
-     *       counts for SPLIT shapes only: both (a, b) and (b, a) are tried.</li>
+     *   <li>the other ordering (sub, quotient) = (ω^s, ω^{s+r+1}) only has split reductions
+     *       (H^1_f(Q_p, Q_p(−r−1)) = 0, so a crystalline extension of ε^{r+1} by an unramified character
+     *       splits; for r = p − 2 both orderings give the same weight anyway), so it counts for SPLIT
+     *       shapes only: both (a, b) and (b, a) are tried.</li>
      * </ul>
      * Worked consequences (see the tests): the supersingular weight-k form gives
      * {Sym^{k−2}, Sym^{p+1−k} ⊗ det^{k−2}}; the split ordinary weight-k form adds Gross's companion

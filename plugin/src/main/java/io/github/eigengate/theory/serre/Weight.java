@@ -13,8 +13,8 @@ import java.util.TreeSet;
  * with 0 ≤ r ≤ p − 1 and 0 ≤ s ≤ p − 2.
  *
  * <p>These p(p − 1) representations are pairwise non-isomorphic and exhaust the irreducible
- * F̄_p-representations of GL2(F_p) (Brauer–Nesbitt; see e.g. Buzzard–Diamond–Jarvis, Duke Math. J.
- * 155 (2010), §2.1, or Ash–Stevens, Duke Math. J. 53 (1986)). So (r, s) in these ranges is a canonical
+ * F̄_p-representations of GL2(F_p) (Brauer–Nesbitt; the parametrisation of Buzzard–Diamond–Jarvis,
+ * Duke Math. J. 155 (2010), §2 — section from memory). So (r, s) in these ranges is a canonical
  * form; det^s only matters modulo p − 1 because det takes values in F_p^×.
  *
  * <p>The record itself only checks r ≥ 0 and s ≥ 0, because p is not part of the value; use
