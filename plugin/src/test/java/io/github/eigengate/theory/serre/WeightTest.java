@@ -70,6 +70,29 @@ class WeightTest {
         assertThrows(NullPointerException.class, () -> Weight.parseSet(null, 5));
     }
 
+    /** Random strings over the alphabet of the syntax: either a valid set or an IllegalArgumentException with a column. */
+    @Test
+    void randomTextEitherParsesOrNamesAColumn() {
+        Random random = new Random(7L);
+        String alphabet = "(),;0123456789- x";
+        int parsed = 0;
+        for (int trial = 0; trial < 5000; trial++) {
+            StringBuilder sb = new StringBuilder();
+            for (int i = random.nextInt(14); i > 0; i--) {
+                sb.append(alphabet.charAt(random.nextInt(alphabet.length())));
+            }
+            String text = trial % 3 == 0 ? "(" + sb : sb.toString();
+            try {
+                Set<Weight> w = Weight.parseSet(text, 7);
+                assertEquals(w, Weight.parseSet(Weight.formatSet(w), 7));
+                parsed++;
+            } catch (IllegalArgumentException e) {
+                assertTrue(e.getMessage().startsWith("weight set \"" + text + "\", column "), e.getMessage());
+            }
+        }
+        assertTrue(parsed > 0);
+    }
+
     private static void assertMessage(String text, int p, String expectedTail) {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> Weight.parseSet(text, p));
         assertEquals("weight set \"" + text + "\", " + expectedTail, e.getMessage());
