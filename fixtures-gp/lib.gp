@@ -56,8 +56,9 @@ fx_space(N, k, B, red) =
         my(R = polredbest(P, 1));
         Q = subst(R[1], 'y, 'x); chg = subst(lift(R[2]), 'y, 'x);
         if (Mod(subst(P, 'y, chg), Q) != 0, fx_err("polredbest change of variable"));
-        note = Str("PARI's field polynomial ", fx_fmt(P), " (variable y) was replaced by polredbest: y = ",
-                   fx_fmt(chg), " mod the field polynomial"),
+        if (chg != 'x || Q != subst(P, 'y, 'x),
+          note = Str("mffields gave ", Str(P), "; field is polredbest(P,1)[1] in x and y = ",
+                     Str(chg), ", so each a_n(y) is written as a_n(", Str(chg), ") mod the field polynomial")),
         Q = subst(P, 'y, 'x));
       if (!fx_is_monic_integral(Q), fx_err(Str("field polynomial not monic integral: ", Q)));
       if (!polisirreducible(Q), fx_err("field polynomial reducible"));
@@ -161,8 +162,9 @@ fx_check_files(dir, forms) =
 \\ Tr_{K/Q}(a_n) equals the n-th coefficient of mftraceform (trace of T_n on the new space).
 fx_check_traces(N, k, forms) =
 {
-  my(mine = [r | r <- forms, r[2] == N && r[3] == k], B = #mine[1][5],
-     T = mfcoefs(mftraceform([N, k], 0), B));
+  my(mine = [r | r <- forms, r[2] == N && r[3] == k], B, T);
+  if (#mine == 0, if (mfdim([N, k, 1], 0) != 0, fx_err("missing space")); return);
+  B = #mine[1][5]; T = mfcoefs(mftraceform([N, k], 0), B);
   for (n = 1, B,
     my(s = sum(i = 1, #mine, my(r = mine[i]); if (r[4] == 0, r[5][n], trace(Mod(r[5][n], r[4])))));
     if (s != T[n + 1], fx_err(Str("trace of T_", n, " on S_", k, "^new(", N, ")"))));
