@@ -43,6 +43,13 @@ public final class Fixture {
         throw new IllegalArgumentException("no row " + prefix);
     }
 
+    /** The value cell of (form, n), unquoted. */
+    public String valueOf(String form, int n) {
+        String line = lines.get(lineOf(form, n) - 1);
+        String v = line.substring((form + "," + n + ",").length());
+        return v.startsWith("\"") ? v.substring(1, v.length() - 1) : v;
+    }
+
     /** The 1-based line of (form, n) in the file. */
     public int lineOf(String form, int n) {
         String prefix = form + "," + n + ",";
