@@ -6,6 +6,8 @@ import io.github.eigengate.check.form.HeckeRelations;
 import io.github.eigengate.check.form.LevelPrimes;
 import io.github.eigengate.check.form.Normalisation;
 import io.github.eigengate.check.form.RamanujanBound;
+import io.github.eigengate.check.space.SpaceDimension;
+import io.github.eigengate.check.space.SpaceTraces;
 import java.util.List;
 
 /** The checks Eigengate runs, in report order. A new check is added here (see DEVELOPERS.md). */
@@ -20,6 +22,8 @@ public final class Checks {
                 new FieldSanity(),
                 new HeckeRelations(),
                 new RamanujanBound(),
-                new LevelPrimes());
+                new LevelPrimes(),
+                new SpaceDimension(),
+                new SpaceTraces());
     }
 }
