@@ -6,7 +6,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import io.github.eigengate.engine.Datasets;
 import io.github.eigengate.engine.Fixture;
 import io.github.eigengate.engine.Gate;
-import io.github.eigengate.engine.RealDatasetsTest;
 import io.github.eigengate.engine.Report;
 import io.github.eigengate.engine.Settings;
 import java.io.IOException;
@@ -34,7 +33,7 @@ class SpaceChecksTest {
     }
 
     private static String read(String file) throws IOException {
-        return Files.readString(RealDatasetsTest.dataset("weight2").resolve(file));
+        return Files.readString(Fixture.dataset("weight2").resolve(file));
     }
 
     private static String without(String text, String prefix) {
@@ -92,15 +91,15 @@ class SpaceChecksTest {
 
     @Test
     void oneCoefficientChangedWithinTheBoundIsFound() throws IOException {
-        // a_97 of the level-11 form is 13 (OEIS A006571); 14 still satisfies 14^2 <= 4*97
+        // a_97 of the level-11 form is -7 (the table, PARI/GP); -6 still satisfies 6^2 <= 4*97
         Fixture f = Fixture.of("datasets/weight2/coefficients.csv");
-        assertEquals("13", f.valueOf("lev11_wt2_o1", 97));
-        f.plant("lev11_wt2_o1", 97, "14");
+        assertEquals("-7", f.valueOf("lev11_wt2_o1", 97));
+        f.plant("lev11_wt2_o1", 97, "-6");
         String spaces = read("spaces.csv");
         List<String> lines = Datasets.lines(run(read("forms.csv"), f.text(), spaces));
         assertEquals(List.of("data/spaces.csv:" + spaceLine(spaces, "11,2") + ": error [space-traces] space=N=11 k=2 "
-                + "n=97: expected Tr T_97 = 13, found sum of Tr(a_97) = 14; the declared forms' traces differ from the "
-                + "trace formula at n = 97, 194, 291 of 272 compared: an orbit is missing, listed twice, or a "
+                + "n=97: expected Tr T_97 = -7, found sum of Tr(a_97) = -6; the declared forms' traces differ from the "
+                + "trace formula at n = 97 of 273 compared: an orbit is missing, listed twice, or a "
                 + "coefficient is wrong"), lines);
     }
 
