@@ -18,7 +18,7 @@ import java.util.List;
  * <p>Elements are stored on the power basis {@code 1, x, ..., x^(d-1)} as integer numerators over
  * one common positive denominator (in lowest terms), and products are reduced with a precomputed
  * table of {@code x^k mod f} for {@code d <= k <= 2d-2}; traces use the power sums of the roots of
- * {@code f}, precomputed by Newton's identities (Cohen, GTM 138, §4.3).
+ * {@code f}, precomputed by Newton's identities.
  */
 public final class NumberField implements Field<NumberField.Element> {
     private final QPoly f;
@@ -506,7 +506,7 @@ public final class NumberField implements Field<NumberField.Element> {
          * @return the characteristic polynomial of multiplication by this element on {@code K}
          *     (monic, of degree {@code d}). Computed from the power sums {@code p_k = Tr(a^k)}, {@code
          *     1 <= k <= d}, by Newton's identities {@code k e_k = sum_{i=1}^{k} (-1)^(i-1) e_{k-i}
-         *     p_i} (valid in characteristic 0; see Cohen, GTM 138, §4.3): {@code d - 1}
+         *     p_i} (Newton's identities, valid in characteristic 0): {@code d - 1}
          *     multiplications in {@code K} and {@code O(d^2)} rational operations.
          */
         public QPoly charPoly() {

@@ -247,7 +247,7 @@ public final class QPoly {
 
     /**
      * @return the monic greatest common divisor; {@code gcd(0, 0) = 0}. Computed via the primitive
-     *     polynomial remainder sequence over Z (Cohen, GTM 138, Alg. 3.3.1) to avoid rational
+     *     polynomial remainder sequence over Z (Knuth, TAOCP vol. 2, §4.6.1) to avoid rational
      *     coefficient growth.
      */
     public QPoly gcd(QPoly o) {

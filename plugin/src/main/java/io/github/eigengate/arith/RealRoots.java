@@ -10,8 +10,11 @@ import java.util.List;
  * <p>For a squarefree polynomial {@code g} let {@code g_0 = g}, {@code g_1 = g'} and {@code g_{i+1}
  * = -rem(g_{i-1}, g_i)} until the remainder vanishes, and let {@code V(t)} be the number of sign
  * changes (zeros skipped) in {@code g_0(t), g_1(t), ...}. Sturm's theorem (Basu–Pollack–Roy,
- * <i>Algorithms in Real Algebraic Geometry</i>, §2.2.2, Thm. 2.50) says that for {@code a < b} the
- * number of roots of {@code g} in the half-open interval {@code (a, b]} is {@code V(a) - V(b)}.
+ * <i>Algorithms in Real Algebraic Geometry</i>, §2.2) says that for {@code a < b} the
+ * number of roots of {@code g} in the half-open interval {@code (a, b]} is {@code V(a) - V(b)}; this
+ * holds also when {@code a} or {@code b} is a root, because at a root {@code c} the term {@code g_0(c)
+ * = 0} is skipped while {@code g_0} and {@code g_1} have equal signs just right of {@code c}, so
+ * {@code V(c) = V(c+)}. The closed interval adds 1 if {@code g(a) = 0}.
  * Each {@code g_i} is replaced by a positive multiple with integer coefficients (pseudo-remainders
  * with positive multipliers, then division by the positive content), which changes no sign.
  * Everything is evaluated exactly at rational points; nothing is decided in floating point.
