@@ -70,7 +70,7 @@ public final class FiniteField implements Field<FiniteField.Element> {
 
     /** @return the image of the integer {@code n} */
     public Element fromLong(long n) {
-        return new Element(this, FpPoly.of(p, n));
+        return new Element(this, FpPoly.wrap(p, new long[] {Math.floorMod(n, p)}));
     }
 
     /**

@@ -37,9 +37,18 @@ public final class FpPoly implements Comparable<FpPoly> {
         return new FpPoly(p, n == c.length ? c : Arrays.copyOf(c, n));
     }
 
+    /** Moduli already found prime; bounded so that a long-running process cannot grow it without limit. */
+    private static final java.util.Set<Long> KNOWN_PRIMES = java.util.concurrent.ConcurrentHashMap.newKeySet();
+
     static void checkPrime(long p) {
+        if (KNOWN_PRIMES.contains(p)) {
+            return;
+        }
         if (p < 2 || p >= (1L << 31) || !BigInteger.valueOf(p).isProbablePrime(64)) {
             throw new IllegalArgumentException("modulus must be a prime below 2^31: " + p);
+        }
+        if (KNOWN_PRIMES.size() < 4096) {
+            KNOWN_PRIMES.add(p);
         }
     }
 

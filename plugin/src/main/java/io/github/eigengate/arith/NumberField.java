@@ -421,7 +421,7 @@ public final class NumberField implements Field<NumberField.Element> {
         /**
          * @return {@code 1/this}: the solution {@code y} of {@code M y = e_0}, where {@code M} is the
          *     matrix of multiplication by this element on the power basis (cleared of denominators),
-         *     by fraction-free Gaussian elimination (Bareiss 1968; Cohen, GTM 138, Alg. 2.2.6) and
+         *     by fraction-free Gaussian elimination (Bareiss, Math. Comp. 22 (1968); Cohen, GTM 138, §2.2) and
          *     exact back substitution of {@code det(M) y}
          * @throws ArithmeticException if the norm is zero (this is zero, or {@code f} is reducible)
          */

@@ -60,6 +60,44 @@ public final class RealRoots {
         return countDistinctRootsIn(f, lo, hi) == distinct;
     }
 
+    /**
+     * Decides whether every complex root {@code α} of {@code f} is real with {@code α^2 <= c}, i.e.
+     * lies in {@code [-sqrt c, sqrt c]} — the shape of a Ramanujan–Petersson bound {@code |α| <= 2
+     * p^((k-1)/2)}, checked as {@code α^2 <= 4 p^(k-1)} without irrational interval ends. Uses the
+     * root-squaring (Graeffe) polynomial {@code F} with {@code F(x^2) = ± f(x) f(-x)}, whose roots are
+     * the {@code α^2}: the answer is yes iff all roots of {@code f} are real and all roots of {@code
+     * F} lie in {@code [0, c]}.
+     *
+     * @throws IllegalArgumentException if {@code f} is constant (or zero)
+     */
+    public static boolean allRootsRealWithSquareAtMost(QPoly f, Rational c) {
+        if (f.degree() < 1) {
+            throw new IllegalArgumentException("polynomial of degree >= 1 required, got " + f);
+        }
+        if (c.signum() < 0) {
+            return false;
+        }
+        QPoly g = f.squarefreePart();
+        if (countDistinctRealRoots(g) != g.degree()) {
+            return false;
+        }
+        QPoly fMinus = g.multiply(reflect(g));
+        Rational[] y = new Rational[g.degree() + 1];
+        for (int k = 0; k <= g.degree(); k++) {
+            y[k] = fMinus.coefficient(2 * k);
+        }
+        return allRootsRealIn(QPoly.of(y), Rational.ZERO, c);
+    }
+
+    /** @return {@code f(-x)} */
+    private static QPoly reflect(QPoly f) {
+        Rational[] r = new Rational[f.degree() + 1];
+        for (int k = 0; k <= f.degree(); k++) {
+            r[k] = k % 2 == 0 ? f.coefficient(k) : f.coefficient(k).negate();
+        }
+        return QPoly.of(r);
+    }
+
     /** The Sturm sequence of the squarefree part of {@code f}, as positive integer multiples. */
     static List<BigInteger[]> sturmSequence(QPoly f) {
         if (f.isZero()) {
