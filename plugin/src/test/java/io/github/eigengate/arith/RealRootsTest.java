@@ -67,7 +67,7 @@ class RealRootsTest {
         assertFalse(RealRoots.allRootsRealWithSquareAtMost(p("x - 1"), q("-1")));
         assertTrue(RealRoots.allRootsRealWithSquareAtMost(p("x"), q("0")));
         assertThrows(IllegalArgumentException.class, () -> RealRoots.allRootsRealWithSquareAtMost(p("3"), q("1")));
-        // Ramanujan's tau: tau(2) = -24 (OEIS A000594; from memory), so x^2 + 24x + 2^11 has |roots| = 2^(11/2)
+        // Ramanujan's tau: tau(2) = -24 (OEIS A000594; gp: ramanujantau(2) -> -24), so x^2 + 24x + 2^11 has |roots| = 2^(11/2)
         // (non-real); the real-root form of the bound is tau(2)^2 <= 4 * 2^11 = 8192: 576 <= 8192.
         assertTrue(RealRoots.allRootsRealWithSquareAtMost(p("x + 24"), q("8192")));
         assertFalse(RealRoots.allRootsRealWithSquareAtMost(p("x + 24"), q("575")));
