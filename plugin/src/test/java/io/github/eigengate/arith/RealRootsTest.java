@@ -38,6 +38,20 @@ class RealRootsTest {
         }
     }
 
+    /** Fixture: PARI/GP {@code polsturm} on seeded random polynomials and intervals; script at the top of the file. */
+    @Test
+    void randomPolynomialsAgreeWithPari() {
+        int n = 0;
+        for (String[] row : Fixtures.rows("real-roots-random.csv")) {
+            QPoly f = p(row[0]);
+            String ctx = String.join(";", row);
+            assertEquals(Integer.parseInt(row[3]), RealRoots.countDistinctRootsIn(f, q(row[1]), q(row[2])), ctx);
+            assertEquals(Integer.parseInt(row[4]), RealRoots.countDistinctRealRoots(f), ctx);
+            n++;
+        }
+        assertEquals(50, n);
+    }
+
     @Test
     void allRootsRealIn() {
         assertTrue(RealRoots.allRootsRealIn(p("x^2 - 2"), q("-2"), q("2")));
