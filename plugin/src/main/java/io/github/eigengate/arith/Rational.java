@@ -70,11 +70,6 @@ public final class Rational implements Comparable<Rational> {
         return new Rational(num, den);
     }
 
-    /** Package-private: builds from a pair already known to be canonical. */
-    static Rational ofCanonical(BigInteger num, BigInteger den) {
-        return num.signum() == 0 ? ZERO : new Rational(num, den);
-    }
-
     /**
      * Parses a rational number written without whitespace: an optional sign {@code +} or {@code -},
      * decimal digits, and optionally {@code /} followed by decimal digits (a nonzero denominator).
