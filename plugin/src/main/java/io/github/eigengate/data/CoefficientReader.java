@@ -77,6 +77,9 @@ public final class CoefficientReader {
             valueAt = row.position("value");
         }
         String id = row.get(formAt);
+        if (current == null && id.equals(unknownRun)) {
+            return; // the rest of an unknown form's run, reported at its first row
+        }
         if (current == null || !current.form.id().equals(id)) {
             endRun();
             startRun(row, id);
