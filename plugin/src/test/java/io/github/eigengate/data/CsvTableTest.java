@@ -13,13 +13,13 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-class CsvTableTest {
+public class CsvTableTest {
 
     @TempDir
     Path dir;
 
     /** Records what a reader reports, as strings. */
-    static final class Recorded implements Problems {
+    public static final class Recorded implements Problems {
         final List<String> errors = new ArrayList<>();
         final List<String> warnings = new ArrayList<>();
 
