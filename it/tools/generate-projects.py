@@ -160,3 +160,10 @@ project('unknown-skip-check', 'An unknown check id in skipChecks is a configurat
         {'data/forms.csv': FORMS, 'data/coefficients.csv': coeffs(),
          'invoker.properties': 'invoker.goals = verify -Deigengate.skipChecks=no-such-check\ninvoker.buildResult = failure\n'},
         ["eigengate: unknown check 'no-such-check' in skipChecks; known checks: normalisation, field-sanity"])
+project('datasets-by-property', 'eigengate.datasets takes comma-separated directories; each is checked.',
+        {'tables-a/forms.csv': FORMS, 'tables-a/coefficients.csv': coeffs(),
+         'tables-b/forms.csv': FORMS, 'tables-b/coefficients.csv': coeffs(l11=bad),
+         'invoker.properties': 'invoker.systemPropertiesFile = test.properties\ninvoker.buildResult = failure\n',
+         'test.properties': 'eigengate.datasets = tables-a,tables-b\n'},
+        ['[ERROR] eigengate: 3 errors, 0 warnings, 0 notes in 2 datasets (4 forms, 48 coefficient rows',
+         '[ERROR] tables-b/coefficients.csv:4: error [normalisation] form=lev11_wt2_o1 n=1: expected 1, found 2'])
