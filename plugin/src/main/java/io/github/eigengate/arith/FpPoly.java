@@ -457,35 +457,7 @@ public final class FpPoly implements Comparable<FpPoly> {
     }
 
     /** An irreducible monic factor with its multiplicity. */
-    public static final class Factor {
-        private final FpPoly factor;
-        private final int multiplicity;
-
-        Factor(FpPoly factor, int multiplicity) {
-            this.factor = factor;
-            this.multiplicity = multiplicity;
-        }
-
-        /** @return the monic irreducible factor */
-        public FpPoly factor() {
-            return factor;
-        }
-
-        /** @return its multiplicity ({@code >= 1}) */
-        public int multiplicity() {
-            return multiplicity;
-        }
-
-        @Override
-        public boolean equals(Object o) {
-            return o instanceof Factor f && f.factor.equals(factor) && f.multiplicity == multiplicity;
-        }
-
-        @Override
-        public int hashCode() {
-            return factor.hashCode() * 31 + multiplicity;
-        }
-
+    public record Factor(FpPoly factor, int multiplicity) {
         /** @return e.g. {@code "(x + 1)^2"} */
         @Override
         public String toString() {

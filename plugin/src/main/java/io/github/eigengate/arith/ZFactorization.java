@@ -25,39 +25,7 @@ public final class ZFactorization {
     private ZFactorization() {}
 
     /** An irreducible factor with its multiplicity. */
-    public static final class Factor {
-        private final QPoly factor;
-        private final int multiplicity;
-
-        Factor(QPoly factor, int multiplicity) {
-            this.factor = factor;
-            this.multiplicity = multiplicity;
-        }
-
-        /** @return the irreducible factor: primitive integer coefficients, positive leading coefficient */
-        public QPoly factor() {
-            return factor;
-        }
-
-        /** @return the multiplicity ({@code >= 1}) */
-        public int multiplicity() {
-            return multiplicity;
-        }
-
-        @Override
-        public boolean equals(Object o) {
-            return o instanceof Factor f && f.factor.equals(factor) && f.multiplicity == multiplicity;
-        }
-
-        @Override
-        public int hashCode() {
-            return 31 * factor.hashCode() + multiplicity;
-        }
-
-        @Override
-        public String toString() {
-            return "(" + factor + ")" + (multiplicity == 1 ? "" : "^" + multiplicity);
-        }
+    public record Factor(QPoly factor, int multiplicity) {
     }
 
     /**
