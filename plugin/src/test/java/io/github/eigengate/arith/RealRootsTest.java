@@ -55,6 +55,28 @@ class RealRootsTest {
     }
 
     @Test
+    void rootsWithBoundedSquares() {
+        // roots ±sqrt2: squares exactly 2
+        assertTrue(RealRoots.allRootsRealWithSquareAtMost(p("x^2 - 2"), q("2")));
+        assertFalse(RealRoots.allRootsRealWithSquareAtMost(p("x^2 - 2"), q("199/100")));
+        // roots 1 and -3 (double): squares 1 and 9
+        assertTrue(RealRoots.allRootsRealWithSquareAtMost(p("x^3 + 5x^2 + 3x - 9"), q("9")));
+        assertFalse(RealRoots.allRootsRealWithSquareAtMost(p("x^3 + 5x^2 + 3x - 9"), q("8")));
+        // complex roots ±i are rejected whatever the bound
+        assertFalse(RealRoots.allRootsRealWithSquareAtMost(p("x^2 + 1"), q("100")));
+        assertFalse(RealRoots.allRootsRealWithSquareAtMost(p("x - 1"), q("-1")));
+        assertTrue(RealRoots.allRootsRealWithSquareAtMost(p("x"), q("0")));
+        assertThrows(IllegalArgumentException.class, () -> RealRoots.allRootsRealWithSquareAtMost(p("3"), q("1")));
+        // Ramanujan's tau: tau(2) = -24 (OEIS A000594; gp: ramanujantau(2) -> -24), so x^2 + 24x + 2^11 has |roots| = 2^(11/2)
+        // (non-real); the real-root form of the bound is tau(2)^2 <= 4 * 2^11 = 8192: 576 <= 8192.
+        assertTrue(RealRoots.allRootsRealWithSquareAtMost(p("x + 24"), q("8192")));
+        assertFalse(RealRoots.allRootsRealWithSquareAtMost(p("x + 24"), q("575")));
+        // golden-ratio field: roots (1 ± sqrt5)/2, squares (3 ± sqrt5)/2; gp: ((1+sqrt(5))/2)^2 -> 2.6180339887...
+        assertTrue(RealRoots.allRootsRealWithSquareAtMost(p("x^2 - x - 1"), q("262/100")));
+        assertFalse(RealRoots.allRootsRealWithSquareAtMost(p("x^2 - x - 1"), q("261/100")));
+    }
+
+    @Test
     void degreeTwentyWithSpreadRoots() {
         // prod_{k=1}^{20} (x - (k - 10) * 1000/3): roots -3000, ..., 10000/3
         QPoly f = QPoly.ONE;
