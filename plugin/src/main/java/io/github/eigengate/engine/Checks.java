@@ -20,6 +20,8 @@ public final class Checks {
                 new FieldSanity(),
                 new HeckeRelations(),
                 new RamanujanBound(),
-                new LevelPrimes());
+                new LevelPrimes(),
+                new io.github.eigengate.check.congruence.CongruenceCheck(settings.uncertifiedIsWarning()),
+                new io.github.eigengate.check.congruence.ReducibleCheck(settings.uncertifiedIsWarning()));
     }
 }
