@@ -182,7 +182,7 @@ public final class CongruenceCheck implements Check {
                     best = m;
                 }
             }
-            boolean searched = c.primeF == null || c.primeG == null;
+            boolean searched = (c.primeF == null && !f.rational()) || (c.primeG == null && !g.rational());
             if (best == null) {
                 Match worst = matches.get(0);
                 for (Match m : matches) {
@@ -251,7 +251,7 @@ public final class CongruenceCheck implements Check {
             b.append("bound B = floor(W*index/12): ").append(plan.bound()).append('\n');
             b.append("checked: a_l for every prime l <= ").append(plan.bound()).append(" not dividing ")
                     .append(product(excluded)).append(plan.comparesAtP() ? ", and a_" + c.p : "").append('\n');
-            b.append("tables complete up to l = ").append(x).append('\n');
+            b.append("tables: every needed a_l present up to at least l = ").append(x).append('\n');
             b.append("claim row: ").append(c.row.at()).append('\n');
             b.append("dataset: ").append(catalog.display()).append('\n');
             b.append(checksums());

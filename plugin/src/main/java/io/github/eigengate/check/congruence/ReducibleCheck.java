@@ -255,7 +255,7 @@ public final class ReducibleCheck implements Check {
             b.append("bound B = floor(W*index/12): ").append(plan.bound()).append('\n');
             b.append("checked: a_l for every prime l <= ").append(plan.bound()).append(" not dividing ")
                     .append(product(excluded)).append(plan.comparesAtP() ? ", and a_" + c.p : "").append('\n');
-            b.append("tables complete up to l = ").append(x).append('\n');
+            b.append("tables: every needed a_l present up to at least l = ").append(x).append('\n');
             b.append("claim row: ").append(c.row.at()).append('\n');
             b.append("dataset: ").append(catalog.display()).append('\n');
             b.append(checksums());
