@@ -320,6 +320,7 @@ public final class CongruenceCheck implements Check {
                         + ") by x_" + sf.form.id() + " -> " + alpha + ", x_" + sg.form.id() + " -> " + beta;
                 Match m = new Match(pf, kf, pg, kg, alpha, beta, ident);
                 int n = Math.min(sf.ells.length, sg.ells.length);
+                boolean fast = l == 1 && sf.linear(kf) && sg.linear(kg);
                 for (int idx = 0; idx < n; idx++) {
                     long ell = sf.ells[idx];
                     if (ell > top) {
@@ -328,19 +329,26 @@ public final class CongruenceCheck implements Check {
                     if (excluded.contains(ell)) {
                         continue;
                     }
-                    FiniteField.Element a = sf.residues[kf][idx];
-                    FiniteField.Element b = sg.residues[kg][idx];
+                    long twist = Residues.powMod(ell, jr, p);
+                    if (fast) {
+                        long a = sf.flat[kf][idx];
+                        long b = sg.flat[kg][idx] * twist % p;
+                        if (a != b) {
+                            m.failAt = ell;
+                            m.left = Long.toString(a);
+                            m.right = Long.toString(b);
+                            break;
+                        }
+                        continue;
+                    }
+                    FiniteField.Element a = sf.residue(kf, idx);
                     FiniteField.Element left = big.evaluate(a.value(), alpha);
-                    FiniteField.Element twist = big.fromLong(BigInteger.valueOf(ell).modPow(BigInteger.valueOf(jr),
-                            BigInteger.valueOf(p)).longValue());
-                    FiniteField.Element right = big.evaluate(b.value(), beta).multiply(twist);
+                    FiniteField.Element right = big.evaluate(sg.residue(kg, idx).value(), beta)
+                            .multiply(big.fromLong(twist));
                     if (!left.equals(right)) {
                         m.failAt = ell;
-                        m.left = a.toString();
+                        m.left = l == 1 ? a.toString() : left + " in F_" + p + "[x]/(" + big.modulus() + ")";
                         m.right = l == 1 ? right.toString() : right + " in F_" + p + "[x]/(" + big.modulus() + ")";
-                        if (l != 1) {
-                            m.left = left + " in F_" + p + "[x]/(" + big.modulus() + ")";
-                        }
                         break;
                     }
                 }

@@ -138,9 +138,8 @@ public final class ReducibleCheck implements Check {
             Set<Long> excluded = primesDividing(p, f.level());
             long x = s.complete(excluded);
             long top = Math.min(x, asLong(c.plans.get(c.plans.size() - 1).bound()));
-            BigInteger bp = BigInteger.valueOf(p);
-            BigInteger ei = BigInteger.valueOf(Math.floorMod(c.i, p - 1));
-            BigInteger ej = BigInteger.valueOf(Math.floorMod(c.j, p - 1));
+            long ei = Math.floorMod(c.i, p - 1);
+            long ej = Math.floorMod(c.j, p - 1);
 
             int bestK = -1;
             Plan plan = null;
@@ -162,12 +161,11 @@ public final class ReducibleCheck implements Check {
                     if (excluded.contains(ell)) {
                         continue;
                     }
-                    BigInteger bl = BigInteger.valueOf(ell);
-                    long want = bl.modPow(ei, bp).add(bl.modPow(ej, bp)).mod(bp).longValue();
-                    FiniteField.Element have = s.residues[k][idx];
-                    if (!have.equals(field.fromLong(want))) {
+                    long want = (Residues.powMod(ell, ei, p) + Residues.powMod(ell, ej, p)) % p;
+                    boolean same = s.linear(k) ? s.flat[k][idx] == want : s.residue(k, idx).equals(field.fromLong(want));
+                    if (!same) {
                         failAt = ell;
-                        left = have.toString();
+                        left = s.residue(k, idx).toString();
                         right = Long.toString(want);
                         break;
                     }

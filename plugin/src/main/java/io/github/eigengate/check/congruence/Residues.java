@@ -10,6 +10,7 @@ import io.github.eigengate.arith.Rational;
 import io.github.eigengate.data.Coefficients;
 import io.github.eigengate.data.Form;
 import io.github.eigengate.data.FormData;
+import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
@@ -75,6 +76,51 @@ final class Residues {
         return field.element(FpPoly.fromQPoly(poly, p));
     }
 
+    /**
+     * The image of a coefficient under Z[x] → F_p, x ↦ c (the reduction at a degree-1 prime (p, x − c)), by Horner's
+     * rule on longs; p < 2^31 so products fit.
+     *
+     * @throws ArithmeticException when p divides a denominator
+     */
+    static long reduceAt(Object value, long c, long p) {
+        if (value instanceof Rational r) {
+            return mod(r, p);
+        }
+        List<Rational> coords = ((NumberField.Element) value).coordinates();
+        long acc = 0;
+        for (int i = coords.size() - 1; i >= 0; i--) {
+            acc = (acc * c + mod(coords.get(i), p)) % p;
+        }
+        return acc;
+    }
+
+    private static long mod(Rational r, long p) {
+        BigInteger bp = BigInteger.valueOf(p);
+        long n = r.num().mod(bp).longValue();
+        if (r.isInteger()) {
+            return n;
+        }
+        long d = r.den().mod(bp).longValue();
+        if (d == 0) {
+            throw new ArithmeticException(r + " has " + p + " in its denominator");
+        }
+        return n * BigInteger.valueOf(d).modInverse(bp).longValue() % p;
+    }
+
+    /** b^e mod p for 0 ≤ b < p < 2^31, e ≥ 0. */
+    static long powMod(long b, long e, long p) {
+        long result = 1 % p;
+        long base = b % p;
+        while (e > 0) {
+            if ((e & 1) == 1) {
+                result = result * base % p;
+            }
+            base = base * base % p;
+            e >>= 1;
+        }
+        return result;
+    }
+
     /** The first monic irreducible polynomial of the given degree over F_p in the order x^d + (c_0 + c_1 p + …). */
     static FpPoly irreducible(long p, int degree) {
         if (degree == 1) {
@@ -106,7 +152,12 @@ final class Residues {
         final List<PrimeAbove> primes;
         int[] ells = new int[0];
         boolean[] present = new boolean[0];
+        /** Residues in fields of degree > 1 ([prime above p][index of ℓ]); rows of degree-1 primes are null. */
         FiniteField.Element[][] residues = new FiniteField.Element[0][];
+        /** Residues in [0, p) at degree-1 primes (the common case, kept as longs); rows of the others are null. */
+        long[][] flat = new long[0][];
+        /** For a degree-1 prime (p, x − c): c, the image of x; unused for the others. */
+        private final long[] root;
         FiniteField.Element[] atP;
         int maxIndex;
         /** The primes were reduced up to here. */
@@ -121,6 +172,20 @@ final class Residues {
             this.limit = limit;
             this.primes = primes;
             this.atP = new FiniteField.Element[primes.size()];
+            this.root = new long[primes.size()];
+            for (int k = 0; k < primes.size(); k++) {
+                FpPoly g = primes.get(k).factor();
+                root[k] = g.degree() == 1 ? Math.floorMod(-g.coefficient(0), p) : 0;
+            }
+        }
+
+        boolean linear(int k) {
+            return primes.get(k).field().degree() == 1;
+        }
+
+        /** The residue of a_ℓ, ℓ = ells[idx], at the k-th prime, as a field element (for messages and degree > 1). */
+        FiniteField.Element residue(int k, int idx) {
+            return linear(k) ? primes.get(k).field().fromLong(flat[k][idx]) : residues[k][idx];
         }
 
         /** Reduces a_ℓ for every prime ℓ ≤ min(limit, the largest n present) and a_p, stopping at a bad value. */
@@ -131,7 +196,15 @@ final class Residues {
             int[] all = sieve.upTo(top);
             ells = all;
             present = new boolean[all.length];
-            residues = new FiniteField.Element[primes.size()][all.length];
+            residues = new FiniteField.Element[primes.size()][];
+            flat = new long[primes.size()][];
+            for (int k = 0; k < primes.size(); k++) {
+                if (linear(k)) {
+                    flat[k] = new long[all.length];
+                } else {
+                    residues[k] = new FiniteField.Element[all.length];
+                }
+            }
             for (int idx = 0; idx < all.length; idx++) {
                 E v = a.get(all[idx]);
                 if (v == null) {
@@ -157,7 +230,11 @@ final class Residues {
         private boolean reduceInto(Object v, int idx, int ell) {
             for (int k = 0; k < primes.size(); k++) {
                 try {
-                    residues[k][idx] = reduce(v, primes.get(k).field());
+                    if (linear(k)) {
+                        flat[k][idx] = reduceAt(v, root[k], p);
+                    } else {
+                        residues[k][idx] = reduce(v, primes.get(k).field());
+                    }
                 } catch (ArithmeticException e) {
                     notIntegralAt = ell;
                     notIntegralValue = v.toString();
