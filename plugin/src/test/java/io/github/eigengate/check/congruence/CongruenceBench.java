@@ -72,13 +72,16 @@ public final class CongruenceBench {
                 }
             };
             Check.Pass pass = new CongruenceCheck(false).start(catalog);
+            long ta = System.nanoTime();
             for (FormData<?> f : forms) {
                 pass.form(f, sink);
             }
+            long tb = System.nanoTime();
             pass.finish(sink);
             long t2 = System.nanoTime();
-            System.out.printf("run %d: read %.1f ms, certify %.1f ms (%d certificate)%n", run, (t1 - t0) / 1e6,
-                    (t2 - t1) / 1e6, certificates.size());
+            System.out.printf("run %d: read %.1f ms, certify %.1f ms (start %.1f, reduce %.1f, finish %.1f; %d "
+                            + "certificate)%n", run, (t1 - t0) / 1e6, (t2 - t1) / 1e6, (ta - t1) / 1e6, (tb - ta) / 1e6,
+                    (t2 - tb) / 1e6, certificates.size());
             if (run == runs) {
                 lines.forEach(System.out::println);
             }
