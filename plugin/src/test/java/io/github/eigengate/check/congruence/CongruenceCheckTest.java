@@ -176,6 +176,21 @@ class CongruenceCheckTest {
     }
 
     @Test
+    void aRationalFormEmbeddedInTheResidueFieldF4() {
+        // mod 2, lev23 has residue field F_4 and f11 has F_2: a_l(lev23) = u + v x must have v even and u ≡ a_l(f11).
+        // PARI/GP (the loop of congruences/gp/level23.gp with E = ellinit([0,-1,1,-10,-20])):
+        //   forprime(l=2,1200,if(l==2||l==11||l==23,next);a=lift(v[l+1]);if(polcoef(a,1,y)%2||(polcoef(a,0,y)
+        //   -ellap(E,l))%2,print(l);break))  prints 5 (a_5(lev23) = -2y, a_5(f11) = 1).
+        Report r = Runs.run(dir, "forms.csv", FORMS, "coefficients.csv", Runs.all("congruences/level23.csv"),
+                "coefficients-11.csv", Runs.all("reference/level11.csv"),
+                "congruences.csv", "form,other,p\nlev23,f11,2\n");
+        assertEquals(List.of("data/congruences.csv:2: error [congruence] congruence=lev23~f11 p=2: expected "
+                + "a_5(lev23) = 5^0*a_5(f11) = 1 in F_2[x]/(x^2 + x + 1) mod (2, x^2 + x + 1) and (2, x), found "
+                + "a_5(lev23) = 0 in F_2[x]/(x^2 + x + 1); the congruence fails at l = 5, the first prime l not "
+                + "dividing 506 where the residues differ"), Datasets.lines(r));
+    }
+
+    @Test
     void malformedCellsAreTableFormatFindings() {
         Report r = Runs.run(dir, "forms.csv", FORMS, "coefficients.csv", Runs.all("congruences/level23.csv"),
                 "congruences.csv", "form,other,p,twist,prime,other_prime\n"
