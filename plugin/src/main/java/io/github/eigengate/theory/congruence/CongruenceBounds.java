@@ -24,7 +24,8 @@ import java.util.TreeMap;
  *   <li><b>Removing p and twisting</b> (route THETA, p ≥ 5). θ = q d/dq maps the reduction of a form of weight k with
  *   p-integral coefficients on Γ0(M) to the reduction of one of weight k + p + 1 on Γ0(M): θF ≡ (∂F·E_{p−1} + k
  *   E_{p+1} F)/12 with Ramanujan's ∂F = 12θF − kE_2F modular of weight k + 2, E_{p−1} ≡ 1 and E_{p+1} ≡ E_2 mod p
- *   (Serre, Sém. Bourbaki 416 (1972), §2; Swinnerton-Dyer, LNM 350 (1973), Lemma 5 and Thm 2; Katz, LNM 601 (1977)).
+ *   (Serre, <i>Congruences et formes modulaires</i>, Sém. Bourbaki 416 (1972); Swinnerton-Dyer, LNM 350 (1973); Katz,
+ *   <i>A result on modular forms in characteristic p</i>, LNM 601 (1977); quoted from memory, without section numbers).
  *   θ^s multiplies a_n by n^s, so θ^s kills the terms with p | n once s ≥ 1, and θ^s h♭, θ^t g♭ have the coefficients
  *   n^s a_n(f), n^t a_n(g) at (n, pQ) = 1.</li>
  *   <li><b>One weight.</b> Multiplying by E_{p−1} ≡ 1 (mod p, p ≥ 5; Serre loc. cit.) raises the weight by p − 1

@@ -10,7 +10,8 @@ import java.util.TreeMap;
  *
  * <p>J. Sturm, <i>On the congruence of modular forms</i>, Number Theory (New York 1984–85), LNM 1240 (1987),
  * Theorem 1: let F ∈ M_W(Γ) have Fourier coefficients in the ring of integers of a number field K and let 𝔓 be a
- * prime of K. If ord_𝔓 a_n(F) > 0 for every n ≤ (W/12)·[SL2(Z) : Γ], then ord_𝔓 a_n(F) > 0 for every n. For
+ * prime of K. If ord_𝔓 a_n(F) > 0 for every n ≤ (W/12)·[SL2(Z) : Γ], then ord_𝔓 a_n(F) > 0 for every n (statement
+ * quoted from memory). For
  * Γ = Γ0(M) the index is m(M) = M ∏_{q | M} (1 + 1/q) (a standard formula, e.g. Diamond–Shurman, <i>A First
  * Course in Modular Forms</i>, §1.2; quoted from memory). Levels are passed factored (prime → exponent), since the
  * levels built by {@link CongruenceBounds} are products of known primes and may not fit a {@code long}.
