@@ -312,23 +312,33 @@ public final class CongruenceBounds {
         return c.num().mod(bp).signum() == 0 && c.den().mod(bp).signum() != 0;
     }
 
+    /** B_0 … B_k, computed once and extended on demand. */
+    private static Rational[] bernoulliTable = {Rational.ONE};
+
     /**
      * The Bernoulli number B_n (B_1 = −1/2) from Σ_{k=0}^{n} C(n+1, k) B_k = 0 (Ireland–Rosen, Ch. 15 §1; quoted from
-     * memory). O(n²) rational operations; used only for n ≤ {@value #BERNOULLI_CAP}.
+     * memory). O(n²) rational operations, shared by all calls; used only for n ≤ {@value #BERNOULLI_CAP}.
+     *
+     * @throws IllegalArgumentException if n < 0
      */
-    static Rational bernoulli(int n) {
-        Rational[] b = new Rational[n + 1];
-        b[0] = Rational.ONE;
-        for (int m = 1; m <= n; m++) {
-            Rational sum = Rational.ZERO;
-            BigInteger binom = BigInteger.ONE; // C(m+1, k)
-            for (int k = 0; k < m; k++) {
-                sum = sum.add(b[k].multiply(Rational.of(binom)));
-                binom = binom.multiply(BigInteger.valueOf(m + 1 - k)).divide(BigInteger.valueOf(k + 1));
-            }
-            b[m] = sum.divide(Rational.of(m + 1)).negate();
+    static synchronized Rational bernoulli(int n) {
+        if (n < 0) {
+            throw new IllegalArgumentException("n must be non-negative, was " + n);
         }
-        return b[n];
+        if (n >= bernoulliTable.length) {
+            Rational[] b = java.util.Arrays.copyOf(bernoulliTable, n + 1);
+            for (int m = bernoulliTable.length; m <= n; m++) {
+                Rational sum = Rational.ZERO;
+                BigInteger binom = BigInteger.ONE; // C(m+1, k)
+                for (int k = 0; k < m; k++) {
+                    sum = sum.add(b[k].multiply(Rational.of(binom)));
+                    binom = binom.multiply(BigInteger.valueOf(m + 1 - k)).divide(BigInteger.valueOf(k + 1));
+                }
+                b[m] = sum.divide(Rational.of(m + 1)).negate();
+            }
+            bernoulliTable = b;
+        }
+        return bernoulliTable[n];
     }
 
     private static void checkPrime(long p) {

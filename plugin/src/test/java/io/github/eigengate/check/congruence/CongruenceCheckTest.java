@@ -230,6 +230,24 @@ class CongruenceCheckTest {
     }
 
     @Test
+    void registeredInTheDefaultGate() {
+        // the full gate (every check); only the lines of the two congruence checks are asserted
+        Datasets.write(dir, "forms.csv", FORMS, "coefficients.csv", Runs.all("reference/tau.csv"),
+                "coefficients-11.csv", Runs.all("reference/level11.csv"),
+                "congruences.csv", "form,other,p,twist\ndelta,f11,5,3\n", "reducible.csv", "form,p,i,j\nf11,7,0,1\n");
+        Report r = Datasets.run(dir);
+        assertTrue(r.checks().containsAll(List.of(CongruenceCheck.ID, ReducibleCheck.ID)), r.checks().toString());
+        assertEquals(List.of("data/congruences.csv:2: error [congruence] congruence=delta~f11 p=5 j=3: expected "
+                        + "a_2(delta) = 2^3*a_2(f11) = 4 mod (5, x) and (5, x), found a_2(delta) = 1; the congruence "
+                        + "fails at l = 2, the first prime l not dividing 55 where the residues differ",
+                "data/reducible.csv:2: error [reducible] reducible=f11 p=7 i=0 j=1: expected a_2(f11) = 2^0 + 2^1 = 3 "
+                        + "mod (7, x), found a_2(f11) = 5; the congruence fails at l = 2, the first prime l not "
+                        + "dividing 77 where the residues differ"),
+                Datasets.lines(r).stream().filter(l -> l.contains("[congruence]") || l.contains("[reducible]"))
+                        .toList());
+    }
+
+    @Test
     void noClaimsNoFindings() {
         Report r = Runs.run(dir, "forms.csv", FORMS, "coefficients.csv", Runs.all("reference/tau.csv"));
         assertEquals(List.of(), Datasets.lines(r));

@@ -155,6 +155,8 @@ class CongruenceBoundsTest {
         assertEquals(Rational.parse("-1/2"), CongruenceBounds.bernoulli(1));
         assertEquals(Rational.parse("1/6"), CongruenceBounds.bernoulli(2));      // PARI/GP: bernfrac(2)
         assertEquals(Rational.ZERO, CongruenceBounds.bernoulli(5));
+        assertEquals(Rational.parse("-3617/510"), CongruenceBounds.bernoulli(16));  // PARI/GP: bernfrac(16)
+        assertEquals(Rational.ONE, CongruenceBounds.bernoulli(0));
         assertTrue(CongruenceBounds.constantTermVanishes(691, 12));
         assertFalse(CongruenceBounds.constantTermVanishes(5, 12));
         List<Plan> plans = CongruenceBounds.forEisenstein(691, 12, 1, 0, 11);
@@ -163,6 +165,16 @@ class CongruenceBoundsTest {
         assertEquals(12, best.eisensteinWeight());
         assertEquals(big(1), best.bound());
         assertTrue(best.comparesAtP());
+    }
+
+    @Test
+    void levelOneWithAHugeWeightStaysFast() {
+        // level 1, p = 5, i = 0, j = 3: k − 1 ≡ 3 mod 4; route DIRECT looks for G_w, w ≡ 0 mod 4, w ≤ k, whose
+        // constant term is ≡ 0 mod 5; the Bernoulli numbers are computed once up to the cap. Route θ always exists.
+        long t0 = System.nanoTime();
+        List<Plan> plans = CongruenceBounds.forEisenstein(5, 100_000, 1, 0, 3);
+        assertTrue(System.nanoTime() - t0 < 5_000_000_000L);
+        assertTrue(plans.stream().anyMatch(pl -> pl.route() == Route.THETA));
     }
 
     @Test
