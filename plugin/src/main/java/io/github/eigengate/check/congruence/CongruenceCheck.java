@@ -191,7 +191,8 @@ public final class CongruenceCheck implements Check {
                     }
                 }
                 out.error(ID, c.row.at(), c.subject, "a_" + worst.failAt + "(" + f.id() + ") = " + worst.failAt + "^"
-                                + c.j + "*a_" + worst.failAt + "(" + g.id() + ") = " + worst.right + " mod " + worst.primes(),
+                                + c.j + "*a_" + worst.failAt + "(" + g.id() + ") = " + worst.right + " mod "
+                                + worst.primes(),
                         "a_" + worst.failAt + "(" + f.id() + ") = " + worst.left,
                         "the congruence fails at l = " + worst.failAt + ", the first prime l not dividing "
                                 + product(excluded) + " where the residues differ"
@@ -223,8 +224,9 @@ public final class CongruenceCheck implements Check {
             out.note(ID, c.row.at(), c.subject, "certified: " + claimText + " for every prime l not dividing "
                     + product(excluded) + ", having checked every l <= B = " + b + " (" + plan.derivation()
                     + "; Sturm, LNM 1240, Thm 1)");
-            out.certificate(new Certificate(certificateName("congruence", f.id(), g.id(),
-                    "p" + p + (c.j != 0 ? "-j" + c.j : "")), certificate(c, best, plan, x, excluded)));
+            String name = c.j != 0 ? certificateName("congruence", f.id(), g.id(), "p" + p, "j" + c.j)
+                    : certificateName("congruence", f.id(), g.id(), "p" + p);
+            out.certificate(new Certificate(name, certificate(c, best, plan, x, excluded)));
         }
 
         private String certificate(Claim c, Match m, Plan plan, long x, Set<Long> excluded) {

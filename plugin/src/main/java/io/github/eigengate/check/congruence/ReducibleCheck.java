@@ -162,7 +162,8 @@ public final class ReducibleCheck implements Check {
                         continue;
                     }
                     long want = (Residues.powMod(ell, ei, p) + Residues.powMod(ell, ej, p)) % p;
-                    boolean same = s.linear(k) ? s.flat[k][idx] == want : s.residue(k, idx).equals(field.fromLong(want));
+                    boolean same = s.linear(k) ? s.flat[k][idx] == want
+                            : s.residue(k, idx).equals(field.fromLong(want));
                     if (!same) {
                         failAt = ell;
                         left = s.residue(k, idx).toString();
@@ -195,7 +196,8 @@ public final class ReducibleCheck implements Check {
                 }
             }
             if (bestK < 0) {
-                out.error(ID, c.row.at(), c.subject, "a_" + worstAt + "(" + f.id() + ") = " + worstAt + "^" + c.i + " + "
+                out.error(ID, c.row.at(), c.subject, "a_" + worstAt + "(" + f.id() + ") = " + worstAt + "^" + c.i
+                                + " + "
                                 + worstAt + "^" + c.j + " = " + worstRight + " mod " + s.primes.get(worstK),
                         "a_" + worstAt + "(" + f.id() + ") = " + worstLeft,
                         "the congruence fails at l = " + worstAt + ", the first prime l not dividing "

@@ -24,8 +24,8 @@ import java.util.Set;
  * and 58 mod 5 (B = 114840), on a_ℓ for ℓ ≤ 115000 computed with PARI/GP (congruences/level11-58.csv, command in its
  * header). Reading the tables is timed apart from the check (the pass over both forms and the final evaluation).
  *
- * <p>Run: {@code mvn -q -o -pl plugin test-compile} then
- * {@code java -cp plugin/target/classes:plugin/target/test-classes io.github.eigengate.check.congruence.CongruenceBench}.
+ * <p>Run as shown in docs/congruences.md, "Benchmark" (the test classes, the main classes and the plugin's
+ * dependencies on the class path; argument: the number of runs, default 5).
  */
 public final class CongruenceBench {
 

@@ -21,7 +21,8 @@ import org.junit.jupiter.api.io.TempDir;
  *   {@code forprime(l=2,1000,if(l==7||l==11||l==2||l==29,next);if((ellap(E11,l)-ellap(E58,l))%7,print(l);break))}.</li>
  *   <li>reference/tau.csv (τ(n), n ≤ 1000, OEIS A000594, PARI/GP {@code ramanujantau}) and reference/level11.csv
  *   (level 11, n ≤ 1000, OEIS A006571, PARI/GP {@code ellan}): τ(ℓ) ≡ ℓ·a_ℓ(f11) mod 5 (both ρ̄ are
- *   ω ⊗ (1 ⊕ ω); checked for ℓ ≤ 1000 with PARI/GP {@code forprime(l=2,1000,if(l!=5&&l!=11&&(ramanujantau(l)-l*ellap(E,l))%5,print(l)))},
+ *   ω ⊗ (1 ⊕ ω); checked for ℓ ≤ 1000 with PARI/GP
+ *   {@code forprime(l=2,1000,if(l!=5&&l!=11&&(ramanujantau(l)-l*ellap(E,l))%5,print(l)))},
  *   no output) and τ(n) ≡ a_n(f11) mod 11 (Δ = η^24 ≡ η²(z)η²(11z) mod 11 since η^11(z) ≡ η(11z); from memory, and
  *   checked the same way for ℓ ≤ 1000, also τ(11) ≡ 1 = a_11).</li>
  *   <li>congruences/level23.csv: the orbit of level 23 over Q(x), x² − x − 1 (PARI/GP {@code mfcoefs}).</li>
@@ -99,7 +100,7 @@ class CongruenceCheckTest {
                         + "l^0*a_l(f11) mod a prime above 11 for every prime l not dividing 11, having checked every "
                         + "l <= B = 12 (f♭ − g♭ (weights 12, 2, brought to 12 by E_10) on Γ0(11), a_p compared too; "
                         + "Sturm, LNM 1240, Thm 1)"), Datasets.lines(r));
-        assertEquals(List.of("congruence-delta-f11-p5_j1.txt", "congruence-delta-f11-p11.txt"),
+        assertEquals(List.of("congruence-delta-f11-p5-j1.txt", "congruence-delta-f11-p11.txt"),
                 r.certificates().stream().map(Certificate::name).toList());
         String text = r.certificates().get(0).text();
         assertTrue(text.contains("twist j: 1\n"), text);

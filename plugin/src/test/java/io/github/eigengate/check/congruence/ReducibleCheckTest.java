@@ -48,7 +48,8 @@ class ReducibleCheckTest {
                         + "(θ^1 f♭ − θ^2 G_4♭ (weights 20, 20, brought to 20 by E_6) on Γ0(1); Sturm, LNM 1240, Thm 1)",
                 "data/reducible.csv:4: note [reducible] reducible=delta p=5 i=1 j=2: certified: a_l(delta) = l^1 + "
                         + "l^2 mod a prime above 5 for every prime l not dividing 5, having checked every l <= B = 1 "
-                        + "(θ^1 f♭ − θ^2 G_6♭ (weights 18, 18, brought to 18 by E_4) on Γ0(1); Sturm, LNM 1240, Thm 1)"),
+                        + "(θ^1 f♭ − θ^2 G_6♭ (weights 18, 18, brought to 18 by E_4) on Γ0(1); Sturm, LNM 1240, "
+                        + "Thm 1)"),
                 Datasets.lines(r));
         assertEquals(List.of("reducible-delta-p691-i0-j11.txt", "reducible-delta-p7-i1-j4.txt",
                 "reducible-delta-p5-i1-j2.txt"), r.certificates().stream().map(Certificate::name).toList());

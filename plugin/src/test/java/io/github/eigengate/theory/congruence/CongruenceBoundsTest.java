@@ -122,7 +122,8 @@ class CongruenceBoundsTest {
 
     @Test
     void deltaAgainstLevel11Mod11() {
-        // p = 11 divides N_g, so nothing is depleted: M = 11, m = 12. DIRECT: W = max(12, 2) = 12 (12 − 2 = 10 = p − 1),
+        // p = 11 divides N_g, so nothing is depleted: M = 11, m = 12.
+        // DIRECT: W = max(12, 2) = 12 (12 − 2 = 10 = p − 1),
         // B = 12. THETA: θΔ, θ f11 of weights 24, 14, W = 24, B = 24.
         List<Plan> plans = CongruenceBounds.forForms(11, 12, 1, 2, 11, 0);
         assertEquals(Route.DIRECT, plans.get(0).route());
