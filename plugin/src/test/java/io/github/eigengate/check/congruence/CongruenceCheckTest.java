@@ -164,6 +164,34 @@ class CongruenceCheckTest {
     }
 
     @Test
+    void theSearchFindsTheFrobeniusIdentification() {
+        // lev23c is the same orbit written with the conjugate root 1 − x (congruences/level23-conjugate.csv, PARI/GP
+        // command in its header). Mod 2 (residue field F_4) only x -> x + 1 matches a_2: −x against x − 1 ≡ x + 1.
+        // Mod 11, x ≡ 8 at (11, x + 3) is 1 − x ≡ 4 at (11, x + 7) for lev23c; at (11, x + 3) for both,
+        // a_2(lev23) = −x ≡ 3 against a_2(lev23c) = x − 1 ≡ 7 at x ≡ 8 (PARI/GP: factormod(x^2-x-1,11)).
+        String forms = FORMS + "lev23c,23,2,x^2 - x - 1\n";
+        Report r = Runs.run(dir, "forms.csv", forms, "coefficients.csv", Runs.all("congruences/level23.csv"),
+                "coefficients-c.csv", Runs.all("congruences/level23-conjugate.csv"),
+                "congruences.csv", "form,other,p,twist,prime,other_prime\nlev23,lev23c,2,,,\n"
+                        + "lev23,lev23c,11,,x + 3,x + 7\nlev23,lev23c,11,,x + 3,x + 3\n");
+        assertEquals(List.of("data/congruences.csv:2: note [congruence] congruence=lev23~lev23c p=2: found the primes "
+                        + "(2, x^2 + x + 1) and (2, x^2 + x + 1) with the residue fields identified inside "
+                        + "F_2[x]/(x^2 + x + 1) by x_lev23 -> x, x_lev23c -> x + 1 under which the congruence holds for "
+                        + "every l <= 92 in the tables",
+                "data/congruences.csv:2: note [congruence] congruence=lev23~lev23c p=2: certified: a_l(lev23) = "
+                        + "l^0*a_l(lev23c) mod a prime above 2 for every prime l not dividing 46, having checked every "
+                        + "l <= B = 92 (f♭ − g♭ (weight 2) on Γ0(529), a_p compared too; Sturm, LNM 1240, Thm 1)",
+                "data/congruences.csv:3: note [congruence] congruence=lev23~lev23c p=11: certified: a_l(lev23) = "
+                        + "l^0*a_l(lev23c) mod a prime above 11 for every prime l not dividing 253, having checked "
+                        + "every l <= B = 92 (f♭ − g♭ (weight 2) on Γ0(529), a_p compared too; Sturm, LNM 1240, "
+                        + "Thm 1)",
+                "data/congruences.csv:4: error [congruence] congruence=lev23~lev23c p=11: expected a_2(lev23) = "
+                        + "2^0*a_2(lev23c) = 7 mod (11, x + 3) and (11, x + 3), found a_2(lev23) = 3; the congruence "
+                        + "fails at l = 2, the first prime l not dividing 253 where the residues differ"),
+                Datasets.lines(r));
+    }
+
+    @Test
     void aRationalFormAgainstADegreeTwoResidueField() {
         // lev23 mod 11 splits: x ≡ 8 at (11, x + 3), x ≡ 4 at (11, x + 7). f11 mod 11 against lev23: a_2(f11) = −2,
         // a_2(lev23) = −x ≡ 3 or 7: no identification works, and the one that holds longest fails first at l = 2
