@@ -1,6 +1,8 @@
 package io.github.eigengate.engine;
 
 import io.github.eigengate.check.Check;
+import io.github.eigengate.check.congruence.CongruenceCheck;
+import io.github.eigengate.check.congruence.ReducibleCheck;
 import io.github.eigengate.check.form.FieldSanity;
 import io.github.eigengate.check.form.HeckeRelations;
 import io.github.eigengate.check.form.LevelPrimes;
@@ -24,6 +26,8 @@ public final class Checks {
                 new RamanujanBound(),
                 new LevelPrimes(),
                 new SpaceDimension(),
-                new SpaceTraces());
+                new SpaceTraces(),
+                new CongruenceCheck(settings.uncertifiedIsWarning()),
+                new ReducibleCheck(settings.uncertifiedIsWarning()));
     }
 }

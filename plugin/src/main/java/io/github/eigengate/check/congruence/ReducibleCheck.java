@@ -1,0 +1,265 @@
+package io.github.eigengate.check.congruence;
+
+import io.github.eigengate.arith.FiniteField;
+import io.github.eigengate.arith.FpPoly;
+import io.github.eigengate.check.Certificate;
+import io.github.eigengate.check.Check;
+import io.github.eigengate.check.FindingSink;
+import io.github.eigengate.check.Subject;
+import io.github.eigengate.data.Catalog;
+import io.github.eigengate.data.Form;
+import io.github.eigengate.data.TableRow;
+import io.github.eigengate.theory.congruence.CongruenceBounds;
+import io.github.eigengate.theory.congruence.CongruenceBounds.Plan;
+import java.math.BigInteger;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Set;
+
+/**
+ * Rows of {@code reducible.csv}: the claim that ρ̄_{f,𝔭} is reducible with semisimplification ω^i ⊕ ω^j, i.e.
+ * a_ℓ(f) ≡ ℓ^i + ℓ^j mod 𝔭 for every prime ℓ ∤ pN — a congruence between f and the Eisenstein series
+ * Σ_n (Σ_{d | n} d^i (n/d)^j) q^n. Decided like {@link CongruenceCheck}, with the bound of
+ * {@link CongruenceBounds#forEisenstein}.
+ */
+public final class ReducibleCheck implements Check {
+
+    public static final String ID = "reducible";
+
+    private final boolean uncertifiedIsWarning;
+
+    /** @param uncertifiedIsWarning report a claim the data cannot certify as a warning instead of an error */
+    public ReducibleCheck(boolean uncertifiedIsWarning) {
+        this.uncertifiedIsWarning = uncertifiedIsWarning;
+    }
+
+    @Override
+    public String id() {
+        return ID;
+    }
+
+    @Override
+    public String title() {
+        return "a_l = l^i + l^j mod a prime above p for all primes l not dividing pN (Eisenstein congruence), "
+                + "certified up to a Sturm-type bound";
+    }
+
+    @Override
+    public Check.Pass start(Catalog catalog) {
+        return new PassImpl(catalog, uncertifiedIsWarning);
+    }
+
+    private record Claim(TableRow row, Form f, long p, long i, long j, FpPoly prime, Subject subject,
+                         List<Plan> plans, String problem) {
+    }
+
+    private static final class PassImpl extends ClaimPass {
+        private final List<Claim> claims = new ArrayList<>();
+
+        PassImpl(Catalog catalog, boolean uncertifiedIsWarning) {
+            super(catalog, uncertifiedIsWarning);
+            for (TableRow row : catalog.reducible()) {
+                Claim c = parse(row);
+                if (c != null) {
+                    claims.add(c);
+                }
+            }
+        }
+
+        private Claim parse(TableRow row) {
+            String label = "reducible=" + row.get("form") + " p=" + row.get("p");
+            Form f = formCell(row, "form", label);
+            long p = primeCell(row, label);
+            Long i = integerCell(row, "i", label, null);
+            Long j = integerCell(row, "j", label, null);
+            if (f == null || p < 0 || i == null || j == null) {
+                return null;
+            }
+            FpPoly prime = primeFactorCell(row, "prime", label, f, p);
+            if (prime == BAD) {
+                return null;
+            }
+            Subject subject = new Subject("reducible", f.id(), "p=" + p + " i=" + i + " j=" + j);
+            List<Plan> plans = List.of();
+            String problem = null;
+            if (f.weight() < 2) {
+                problem = "weight 1 is not supported: the bound needs k >= 2";
+            } else if (CongruenceBounds.eisensteinDeterminantMatches(p, f.weight(), i, j)) {
+                plans = CongruenceBounds.forEisenstein(p, f.weight(), f.level(), i, j);
+                if (plans.isEmpty()) {
+                    problem = "no Sturm-type bound is implemented for this case (p = " + p + ", level " + f.level()
+                            + ", i = " + i + ", j = " + j + "): for p = 2, 3 one exponent must be = 0 mod p - 1 and "
+                            + "the level must have a prime other than p; see docs/congruences.md";
+                }
+            }
+            if (!plans.isEmpty()) {
+                need(f, p, asLong(plans.get(plans.size() - 1).bound()));
+            }
+            return new Claim(row, f, p, i, j, prime, subject, plans, problem);
+        }
+
+        @Override
+        void evaluate(FindingSink out) {
+            for (Claim c : claims) {
+                out.examined(ID, c.subject);
+                evaluate(c, out);
+            }
+        }
+
+        private void evaluate(Claim c, FindingSink out) {
+            Form f = c.f;
+            long p = c.p;
+            String claimText = "a_l(" + f.id() + ") = l^" + c.i + " + l^" + c.j + " mod a prime above " + p;
+            if (c.problem != null) {
+                out.error(ID, c.row.at(), c.subject, "a certifiable congruence", claimText, c.problem);
+                return;
+            }
+            if (!CongruenceBounds.eisensteinDeterminantMatches(p, f.weight(), c.i, c.j)) {
+                out.error(ID, c.row.at(), c.subject, "k - 1 = i + j mod " + (p - 1),
+                        "k=" + f.weight() + ", i=" + c.i + ", j=" + c.j,
+                        "the claim is false: det of the mod-p representation of " + f.id() + " is omega^"
+                                + (f.weight() - 1) + ", not omega^(i+j), so a_l differs from l^i + l^j at a positive "
+                                + "density of primes (Chebotarev, Brauer–Nesbitt)");
+                return;
+            }
+            String ip = indexProblem(f, p);
+            if (ip != null) {
+                out.error(ID, c.row.at(), c.subject, "primes above " + p + " named by factors of "
+                        + f.fieldPolynomial() + " mod " + p, "an index divisible by " + p, "not supported: " + ip);
+                return;
+            }
+            Residues.Store s = store(f, p);
+            if (s.notIntegralAt > 0 && s.notIntegralAt <= asLong(c.plans.get(0).bound())) {
+                out.error(ID, c.row.at(), c.subject, "a_" + s.notIntegralAt + "(" + f.id() + ") integral at " + p,
+                        s.notIntegralValue, "a_l of a newform is an algebraic integer, so it has a residue mod every "
+                                + "prime above p; this one has " + p + " in a denominator");
+                return;
+            }
+            Set<Long> excluded = primesDividing(p, f.level());
+            long x = s.complete(excluded);
+            long top = Math.min(x, asLong(c.plans.get(c.plans.size() - 1).bound()));
+            long ei = Math.floorMod(c.i, p - 1);
+            long ej = Math.floorMod(c.j, p - 1);
+
+            int bestK = -1;
+            Plan plan = null;
+            int worstK = -1;
+            long worstAt = 0;
+            String worstLeft = "";
+            String worstRight = "";
+            for (int k = 0; k < s.primes.size(); k++) {
+                Residues.PrimeAbove pr = s.primes.get(k);
+                if (c.prime != null && !pr.factor().equals(c.prime)) {
+                    continue;
+                }
+                FiniteField field = pr.field();
+                long failAt = 0;
+                String left = "";
+                String right = "";
+                for (int idx = 0; idx < s.ells.length && s.ells[idx] <= top; idx++) {
+                    long ell = s.ells[idx];
+                    if (excluded.contains(ell)) {
+                        continue;
+                    }
+                    long want = (Residues.powMod(ell, ei, p) + Residues.powMod(ell, ej, p)) % p;
+                    boolean same = s.linear(k) ? s.flat[k][idx] == want
+                            : s.residue(k, idx).equals(field.fromLong(want));
+                    if (!same) {
+                        failAt = ell;
+                        left = s.residue(k, idx).toString();
+                        right = Long.toString(want);
+                        break;
+                    }
+                }
+                if (failAt != 0) {
+                    if (failAt > worstAt) {
+                        worstAt = failAt;
+                        worstK = k;
+                        worstLeft = left;
+                        worstRight = right;
+                    }
+                    continue;
+                }
+                FiniteField.Element ap = s.atP[k];
+                for (Plan pl : c.plans) {
+                    if (pl.comparesAtP() && (ap == null || !ap.equals(field.one()))) {
+                        continue;
+                    }
+                    if (plan == null || pl.bound().compareTo(plan.bound()) < 0) {
+                        plan = pl;
+                        bestK = k;
+                    }
+                    break;
+                }
+                if (bestK < 0) {
+                    bestK = k;
+                }
+            }
+            if (bestK < 0) {
+                out.error(ID, c.row.at(), c.subject, "a_" + worstAt + "(" + f.id() + ") = " + worstAt + "^" + c.i
+                                + " + "
+                                + worstAt + "^" + c.j + " = " + worstRight + " mod " + s.primes.get(worstK),
+                        "a_" + worstAt + "(" + f.id() + ") = " + worstLeft,
+                        "the congruence fails at l = " + worstAt + ", the first prime l not dividing "
+                                + product(excluded) + " where the residues differ"
+                                + (c.prime == null && s.primes.size() > 1 ? " (at the prime above " + p
+                                + " where it holds longest; it fails at every prime above " + p + ")" : ""));
+                return;
+            }
+            Residues.PrimeAbove chosen = s.primes.get(bestK);
+            if (c.prime == null && !f.rational()) {
+                out.note(ID, c.row.at(), c.subject, "found the prime " + chosen + " under which the congruence holds "
+                        + "for every l <= " + top + " in the tables");
+            }
+            if (plan == null) {
+                notCertified(out, ID, c.row, c.subject, "a_" + p + "(" + f.id() + ") = 1 mod " + chosen,
+                        "a_p missing or different", "not certified: the only bound available for p = " + p + " ("
+                                + c.plans.get(0).derivation() + ") also compares a_p, which the tables do not give "
+                                + "or which differs");
+                return;
+            }
+            BigInteger b = plan.bound();
+            if (BigInteger.valueOf(x).compareTo(b) < 0) {
+                notCertified(out, ID, c.row, c.subject, "a_l for every prime l <= B = " + b,
+                        "the tables stop at l = " + x,
+                        "not certified: the congruence holds for every l <= " + x + " in the tables, but Sturm's bound "
+                                + "needs l <= " + b + " (" + plan.derivation() + "; Sturm, LNM 1240, Thm 1)");
+                return;
+            }
+            out.note(ID, c.row.at(), c.subject, "certified: " + claimText + " for every prime l not dividing "
+                    + product(excluded) + ", having checked every l <= B = " + b + " (" + plan.derivation()
+                    + "; Sturm, LNM 1240, Thm 1)");
+            out.certificate(new Certificate(certificateName("reducible", f.id(), "p" + p, "i" + c.i, "j" + c.j),
+                    certificate(c, chosen, plan, x, excluded)));
+        }
+
+        private String certificate(Claim c, Residues.PrimeAbove prime, Plan plan, long x, Set<Long> excluded) {
+            StringBuilder b = new StringBuilder();
+            b.append("Eigengate reducibility certificate\n\n");
+            b.append("claim: a_l(").append(c.f.id()).append(") = l^").append(c.i).append(" + l^").append(c.j)
+                    .append(" mod a prime above ").append(c.p).append(", for every prime l not dividing ")
+                    .append(product(excluded)).append('\n');
+            b.append("form: ").append(c.f.id()).append(" (level ").append(c.f.level()).append(", weight ")
+                    .append(c.f.weight()).append(", field ")
+                    .append(c.f.rational() ? "Q" : "Q[x]/(" + c.f.fieldPolynomial() + ")").append(")\n");
+            b.append("p: ").append(c.p).append('\n');
+            b.append("exponents i, j: ").append(c.i).append(", ").append(c.j).append('\n');
+            b.append("prime: ").append(prime).append('\n');
+            b.append("theorem: J. Sturm, On the congruence of modular forms, LNM 1240 (1987), Theorem 1, applied to ")
+                    .append(plan.derivation()).append('\n');
+            b.append("route: ").append(plan.route()).append('\n');
+            b.append("Eisenstein series: G_").append(plan.eisensteinWeight()).append('\n');
+            b.append("level M: ").append(plan.levelValue()).append(", index [SL2(Z):Gamma0(M)] = ")
+                    .append(plan.index()).append('\n');
+            b.append("weight W: ").append(plan.weight()).append('\n');
+            b.append("bound B = floor(W*index/12): ").append(plan.bound()).append('\n');
+            b.append("checked: a_l for every prime l <= ").append(plan.bound()).append(" not dividing ")
+                    .append(product(excluded)).append(plan.comparesAtP() ? ", and a_" + c.p : "").append('\n');
+            b.append("tables: every needed a_l present up to at least l = ").append(x).append('\n');
+            b.append("claim row: ").append(c.row.at()).append('\n');
+            b.append("dataset: ").append(catalog.display()).append('\n');
+            b.append(checksums());
+            return b.toString();
+        }
+    }
+}
