@@ -8,7 +8,7 @@ default(parisizemax, 2^30)
 \\    keeping pairs that are not a_l = 1 + l mod p;
 \\  - different weights, same level N <= 60, p in {5,7,11,13}: rational weight-2 f against
 \\    every orbit of weight p-1 and p+1 and every prime of degree 1 over p, twists 0..p-2;
-\\  - level 1: all pairs of weights 12..36, p <= 61, primes of degree 1.
+\\  - level 1: all pairs of weights 12..36, 7 <= p <= 61, primes of degree 1, twists 0..p-2.
 read("fixtures-gp/lib.gp");
 DIR = "plugin/src/test/resources/datasets/congruences";
 SCRIPT = "congruences";
@@ -28,6 +28,8 @@ CONG = [\
  ["lev11_wt4_o1", "lev11_wt2_o1", 3, 0, x, 0, "(d) weights 4 = p+1 and 2, level 11, no twist; (3, x) is ramified in Q(sqrt 3)"],\
  ["lev1_wt22_o1", "lev1_wt12_o1", 11, 0, 0, 0, "(e) level 1, weights 22 and 12"],\
  ["lev1_wt24_o1", "lev1_wt12_o1", 13, 0, x + 10, 0, "(e) level 1, weights 24 and 12"],\
+ ["lev1_wt16_o1", "lev1_wt12_o1", 13, 2, 0, 0, "(e) level 1, weights 16 and 12, twist 2 (a_l(f_16) = l^2 tau(l) mod 13)"],\
+ ["lev1_wt24_o1", "lev1_wt12_o1", 11, 1, x + 2, 0, "(e) level 1, weights 24 and 12, twist 1 (a_l = l tau(l) mod (11, x + 2))"],\
  ["lev1_wt12_o1", "lev11_wt2_o1", 11, 0, 0, 0, "level 1 weight 12 and level 11 weight 2 mod 11"]];
 \\ [form, other, p, twist, prime, other_prime, comment] claims that must FAIL
 CONGF = [\
@@ -41,6 +43,8 @@ CONGF = [\
  ["lev11_wt4_o1", "lev11_wt2_o1", 3, 1, x, 0, "wrong twist"],\
  ["lev1_wt22_o1", "lev1_wt12_o1", 13, 0, 0, 0, "wrong p"],\
  ["lev1_wt24_o1", "lev1_wt12_o1", 13, 0, x + 2, 0, "the other prime above 13"],\
+ ["lev1_wt16_o1", "lev1_wt12_o1", 13, 1, 0, 0, "twist 1 instead of 2"],\
+ ["lev1_wt24_o1", "lev1_wt12_o1", 11, 1, x + 8, 0, "the other prime above 11"],\
  ["lev1_wt12_o1", "lev11_wt2_o1", 11, 1, 0, 0, "wrong twist"]];
 \\ [form, p, i, j, prime, comment]: a_l = l^i + l^j mod the prime
 RED = [\
