@@ -43,11 +43,14 @@ fx_is_monic_integral(Q) = pollead(Q) == 1 && denominator(content(Q)) == 1;
 \\          integral (checked; no change of variable needed so far).
 \\ red = 1: replace it by Q = polredbest(P, 1)[1]; polredbest also returns a(x) with
 \\          P(a(x)) = 0 mod Q, and every a_n(y) is rewritten exactly as a_n(a(x)) mod Q.
-fx_space(N, k, B, red) =
+\\ Optional idx: vector of orbit positions to compute (default: all).
+fx_space(N, k, B, red, idx = 0) =
 {
-  my(mf = mfinit([N, k, 1], 0), L = mfeigenbasis(mf), F = mffields(mf), res = vector(#L));
+  my(mf = mfinit([N, k, 1], 0), L = mfeigenbasis(mf), F = mffields(mf), res);
   if (#L != #F, fx_err("mffields/mfeigenbasis length"));
-  for (i = 1, #L,
+  if (idx == 0, idx = [1 .. #L]);
+  res = vector(#idx);
+  for (t = 1, #idx, my(i = idx[t]);
     my(P = F[i], v = mfcoefs(L[i], B), Q = 0, chg = 'x, note = "", c);
     if (poldegree(P) == 1,
       c = vector(B, n, my(t = lift(v[n + 1])); if (type(t) == "t_POL", t = polcoef(t, 0));
@@ -64,12 +67,12 @@ fx_space(N, k, B, red) =
       if (!polisirreducible(Q), fx_err("field polynomial reducible"));
       c = vector(B, n, my(t = lift(v[n + 1])); if (type(t) == "t_POL", t = subst(t, 'y, chg));
                        lift(Mod(t, Q))));
-    res[i] = [Str("lev", N, "_wt", k, "_o", i), N, k, Q, c, note]);
+    res[t] = [Str("lev", N, "_wt", k, "_o", i), N, k, Q, c, note]);
   res;
 }
 
 \\ One form: record number i of the space (N,k), coefficients up to B.
-fx_form(N, k, i, B, red) = fx_space(N, k, B, red)[i];
+fx_form(N, k, i, B, red) = fx_space(N, k, B, red, [i])[1];
 
 fx_header(f, script, lines) =
 {
@@ -193,8 +196,9 @@ fx_spaces_dataset(dir, script, spaces, B, red, lines) =
 fx_pick(list, B) =
 {
   my(sp = Set(apply(t -> [t[1], t[2]], list)), cache = Map(), res);
-  for (s = 1, #sp, mapput(cache, sp[s], fx_space(sp[s][1], sp[s][2], B, 0)));
-  res = vector(#list, t, mapget(cache, [list[t][1], list[t][2]])[list[t][3]]);
+  for (s = 1, #sp, my(idx = Set([t[3] | t <- list, t[1] == sp[s][1] && t[2] == sp[s][2]]));
+    mapput(cache, sp[s], [idx, fx_space(sp[s][1], sp[s][2], B, 0, idx)]));
+  res = vector(#list, t, my(c = mapget(cache, [list[t][1], list[t][2]])); c[2][setsearch(c[1], list[t][3])]);
   res;
 }
 
