@@ -115,7 +115,8 @@ public final class CongruenceCheck implements Check {
             long p = c.p;
             String claimText = "a_l(" + f.id() + ") = l^" + c.j + "*a_l(" + g.id() + ") mod a prime above " + p;
             if (c.problem != null) {
-                out.error(ID, c.row.at(), c.subject, "a certifiable congruence", claimText, c.problem);
+                notCertified(out, ID, c.row, c.subject, "a certifiable congruence", claimText,
+                        "not certified: " + c.problem);
                 return;
             }
             if (!CongruenceBounds.determinantsMatch(p, f.weight(), g.weight(), c.j)) {

@@ -111,7 +111,8 @@ public final class ReducibleCheck implements Check {
             long p = c.p;
             String claimText = "a_l(" + f.id() + ") = l^" + c.i + " + l^" + c.j + " mod a prime above " + p;
             if (c.problem != null) {
-                out.error(ID, c.row.at(), c.subject, "a certifiable congruence", claimText, c.problem);
+                notCertified(out, ID, c.row, c.subject, "a certifiable congruence", claimText,
+                        "not certified: " + c.problem);
                 return;
             }
             if (!CongruenceBounds.eisensteinDeterminantMatches(p, f.weight(), c.i, c.j)) {
