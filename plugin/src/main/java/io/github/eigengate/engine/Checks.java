@@ -6,6 +6,8 @@ import io.github.eigengate.check.form.HeckeRelations;
 import io.github.eigengate.check.form.LevelPrimes;
 import io.github.eigengate.check.form.Normalisation;
 import io.github.eigengate.check.form.RamanujanBound;
+import io.github.eigengate.check.weights.WeightChecks;
+import java.util.ArrayList;
 import java.util.List;
 
 /** The checks Eigengate runs, in report order. A new check is added here (see DEVELOPERS.md). */
@@ -15,11 +17,13 @@ public final class Checks {
     }
 
     public static List<Check> all(Settings settings) {
-        return List.of(
+        List<Check> checks = new ArrayList<>(List.of(
                 new Normalisation(),
                 new FieldSanity(),
                 new HeckeRelations(),
                 new RamanujanBound(),
-                new LevelPrimes());
+                new LevelPrimes()));
+        checks.addAll(WeightChecks.all(settings.skip()));
+        return List.copyOf(checks);
     }
 }
