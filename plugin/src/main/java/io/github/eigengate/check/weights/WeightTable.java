@@ -153,6 +153,12 @@ final class WeightTable {
                     "p² − 1 must fit the exact integer arithmetic of the weight recipes");
             return null;
         }
+        String wText = r.get("weights");
+        if (wText.startsWith("(") && wText.indexOf(')') < 0) {
+            problem(r.at("weights"), label, "(r,s);(r,s);... in one quoted cell", wText, "the weight set was split "
+                    + "at its commas: quote the cell, e.g. \"(0,0);(4,0)\"; the row is left out");
+            return null;
+        }
         boolean ok = true;
         Form form = null;
         if (!formId.isEmpty()) {
@@ -247,7 +253,6 @@ final class WeightTable {
             }
         }
         Set<Weight> weights = null;
-        String wText = r.get("weights");
         if (!wText.isEmpty()) {
             try {
                 weights = Weight.parseSet(wText, p);
