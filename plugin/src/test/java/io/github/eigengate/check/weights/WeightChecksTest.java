@@ -32,8 +32,10 @@ import org.junit.jupiter.api.io.TempDir;
  *   <li>ordinary of weight p + 1, très ramifié: W = {Sym^{p−1}}, k(ρ̄) = p + 1 (Serre 1987, §2 — from memory).
  *       For Δ at 11 and the weight-18 form at 17 this is the truth, not an assumption: peu ramifié or split would
  *       give k(ρ̄) = 2, and ρ̄ would come from S_2(SL2(Z)) = 0 (Serre's conjecture, level 1; Khare–Wintenberger).</li>
- *   <li>Δ is its own companion at 23 (a_ℓ ≡ ℓ^11 a_ℓ mod 23: τ(ℓ) ≡ 0 when (ℓ/23) = −1; Serre, Sém. Bourbaki 416
- *       (1972) — from memory; and companion-search.gp), as is the weight-16 form at 31 (companion-search.gp).</li>
+ *   <li>Δ is its own companion at 23: τ(ℓ) ≡ ℓ^11 τ(ℓ) mod 23, as τ(ℓ) ≡ 0 when (ℓ/23) = −1 (Serre, Sém. Bourbaki
+ *       416 (1972) — from memory; checked for ℓ &lt; 300 with
+ *       {@code select(l->l!=23 && (ramanujantau(l)-l^11*ramanujantau(l))%23, primes(300))}, which is empty); the
+ *       weight-16 form is its own companion at 31 (companion-search.gp).</li>
  * </ul>
  */
 class WeightChecksTest {
@@ -95,7 +97,8 @@ class WeightChecksTest {
                         + "1987, §2)",
                 "data/modp-weights.csv:3:5: error [serre-weight] form=delta p=11: expected 2, found 12; Serre's "
                         + "weight of ρ̄ with ρ̄|I_11 ≅ (ω^1 * ; 0 ω^0) non-split, peu ramifié [a_11 ≡ 1 mod 11: ordinary "
-                        + "(Deligne), local=nonsplit] (Serre 1987, §2)"), Scenario.weights("e11,19,,,19,,,", "delta,11,,nonsplit,12,,,").lines(dir));
+                        + "(Deligne), local=nonsplit] (Serre 1987, §2)"),
+                Scenario.weights("e11,19,,,19,,,", "delta,11,,nonsplit,12,,,").lines(dir));
     }
 
     @Test
@@ -103,7 +106,8 @@ class WeightChecksTest {
         assertEquals(List.of(
                 "data/modp-weights.csv:2:6: error [weight-set] form=g27 p=11: expected (4,0);(6,4), found "
                         + "(4,0);(6,5); missing (6,4), extra (6,5); W(ρ̄) for ρ̄|I_11 ≅ ω₂^5 ⊕ ω₂^55 [a_11 ≡ 0 mod 11: "
-                        + "supersingular (Fontaine)] (Buzzard–Diamond–Jarvis 2010, §3)"), Scenario.weights("g27,11,,,,\"(4,0);(6,5)\",,").lines(dir));
+                        + "supersingular (Fontaine)] (Buzzard–Diamond–Jarvis 2010, §3)"),
+                Scenario.weights("g27,11,,,,\"(4,0);(6,5)\",,").lines(dir));
     }
 
     @Test
@@ -112,7 +116,8 @@ class WeightChecksTest {
                 "data/modp-weights.csv:2:6: error [weight-set] form=e21 p=5: expected (0,0);(2,1);(4,0), found "
                         + "(0,0);(4,0); missing (2,1); W(ρ̄) for ρ̄|I_5 ≅ ω^0 ⊕ ω^1 [a_5 ≡ 3 mod 5: ordinary (Deligne), "
                         + "split: companion form declared at data/congruences.csv:2 (Gross 1990)] (Buzzard–Diamond–Jarvis "
-                        + "2010, §3)"), Scenario.weights("e21,5,,,2,\"(0,0);(4,0)\",,")
+                        + "2010, §3)"),
+                Scenario.weights("e21,5,,,2,\"(0,0);(4,0)\",,")
                 .congruences("g21,e21,5,3").lines(dir));
     }
 
@@ -124,7 +129,8 @@ class WeightChecksTest {
                         + "23: ordinary (Deligne), non-split assumed] (Buzzard–Diamond–Jarvis 2010, §3)",
                 "data/modp-weights.csv:2:4: note [weight-of-form] form=delta p=23: a_23 ≡ 1 mod 23: ordinary "
                         + "and no companion form of weight 12 is declared in congruences.csv: assumed non-split at 23 "
-                        + "(Gross 1990); write local=split if it splits"), Scenario.weights("delta,23,,,12,\"(10,0);(10,11)\",,").lines(dir));
+                        + "(Gross 1990); write local=split if it splits"),
+                Scenario.weights("delta,23,,,12,\"(10,0);(10,11)\",,").lines(dir));
     }
 
     @Test
@@ -139,7 +145,8 @@ class WeightChecksTest {
                         + "shape",
                 "data/modp-weights.csv:4:4: error [weight-of-form] form=e11 p=7: expected split or nonsplit, "
                         + "found tres; très ramifié needs ω^(k−1) = ω and k ≠ 2 (weight 2 is finite flat), i.e. k = p + 1 "
-                        + "= 8, but k = 2 (Serre 1987, §2; Edixhoven 1992, §2)"), Scenario.weights("e11,19,,split,,,,", "g27,11,,nonsplit,,,,",
+                        + "= 8, but k = 2 (Serre 1987, §2; Edixhoven 1992, §2)"),
+                Scenario.weights("e11,19,,split,,,,", "g27,11,,nonsplit,,,,",
                 "e11,7,,tres,,,,").lines(dir));
     }
 
@@ -158,7 +165,8 @@ class WeightChecksTest {
                 "data/modp-weights.csv:5:8: error [weight-of-form] form=w16 p=13: expected one of "
                         + "(0,1);(2,0);(10,2) in W(ρ̄), found W(ρ̄) = (4,0);(6,5); w16 has weight 16 and level prime to "
                         + "13, so a Jordan–Hölder constituent of Sym^14 lies in W(ρ̄) (Ash–Stevens 1986; "
-                        + "Buzzard–Diamond–Jarvis 2010, §3); ρ̄|I_13 ≅ ω^0 ⊕ ω^5 [shape=split 0;5]"), Scenario.weights("e11,19,,,,,nonsplit,1;0", "e11,29,,,,,irreducible,2",
+                        + "Buzzard–Diamond–Jarvis 2010, §3); ρ̄|I_13 ≅ ω^0 ⊕ ω^5 [shape=split 0;5]"),
+                Scenario.weights("e11,19,,,,,nonsplit,1;0", "e11,29,,,,,irreducible,2",
                 "e11,13,,,,,irreducible,1", "w16,13,,,,,split,0;5").lines(dir));
     }
 
@@ -181,7 +189,8 @@ class WeightChecksTest {
                         + "W(ρ̄_e27) ⊗ det^1 (Buzzard–Diamond–Jarvis 2010, §3); rows at data/modp-weights.csv:3 [a_7 ≡ 6 "
                         + "mod 7: ordinary (Deligne), split: companion form declared at data/congruences.csv:2 (Gross "
                         + "1990)] and data/modp-weights.csv:2 [a_7 ≡ 6 mod 7: ordinary (Deligne), split: companion form "
-                        + "declared at data/congruences.csv:2 (Gross 1990)]"), Scenario.weights("e27,7,,,,,,", "g27,7,,,,,,")
+                        + "declared at data/congruences.csv:2 (Gross 1990)]"),
+                Scenario.weights("e27,7,,,,,,", "g27,7,,,,,,")
                 .congruences("g27,e27,7,5", "e27,g27,7,1", "g27,e27,7,1").lines(dir));
         assertEquals(List.of(), Scenario.weights("e27,7,,,2,\"(0,0);(6,0);(4,1)\",,",
                 "g27,7,,,6,\"(4,0);(0,5);(6,5)\",,").congruences("e27,g27,7,1").lines(dir.resolve("other")));
@@ -194,7 +203,8 @@ class WeightChecksTest {
                         + "found nonsplit 1;0 at data/modp-weights.csv:2; a_ℓ(g27) ≡ ℓ^5 a_ℓ(e27) mod 7 gives ρ̄_g27 ≅ "
                         + "ρ̄_e27 ⊗ ω^5 with weights 6 + 2 = p + 1 and j ≡ k − 1: a companion pair, so ρ̄|G_7 is split "
                         + "(Gross 1990; Coleman–Voloch 1992), but the row of e27 says (ω^1 * ; 0 ω^0) non-split, peu "
-                        + "ramifié [a_7 ≡ 6 mod 7: ordinary (Deligne), local=nonsplit]"), Scenario.weights("e27,7,,nonsplit,,,,", "g27,7,,,,,,")
+                        + "ramifié [a_7 ≡ 6 mod 7: ordinary (Deligne), local=nonsplit]"),
+                Scenario.weights("e27,7,,nonsplit,,,,", "g27,7,,,,,,")
                 .congruences("g27,e27,7,5").lines(dir));
     }
 
@@ -206,7 +216,8 @@ class WeightChecksTest {
                         + "gives ρ̄_g21 ≅ ρ̄_e21 ⊗ ω^2; g21 has weight 4 and level prime to 5, so its own weight Sym^2 "
                         + "lies in W(ρ̄) (Buzzard–Diamond–Jarvis 2010, §3); row of e21 at data/modp-weights.csv:2 [a_5 ≡ "
                         + "3 mod 5: ordinary (Deligne), split: companion form declared at data/congruences.csv:2 (Gross "
-                        + "1990)]"), Scenario.weights("e21,5,,,,,,")
+                        + "1990)]"),
+                Scenario.weights("e21,5,,,,,,")
                 .congruences("g21,e21,5,3", "g21,e21,5,2").lines(dir));
         assertEquals(List.of(
                 "data/congruences.csv:3: error [weight-congruence] congruence=e21~g21 p=5: expected (2,0) in "
@@ -214,20 +225,23 @@ class WeightChecksTest {
                         + "gives ρ̄_e21 ≅ ρ̄_g21 ⊗ ω^3; g21 has weight 4 and level prime to 5, so its own weight Sym^2 "
                         + "lies in W(ρ̄) (Buzzard–Diamond–Jarvis 2010, §3); row of e21 at data/modp-weights.csv:2 [a_5 ≡ "
                         + "3 mod 5: ordinary (Deligne), split: companion form declared at data/congruences.csv:2 (Gross "
-                        + "1990)]"), Scenario.weights("e21,5,,,,,,")
+                        + "1990)]"),
+                Scenario.weights("e21,5,,,,,,")
                 .congruences("e21,g21,5,1", "e21,g21,5,3").lines(dir.resolve("other")));
     }
 
     @Test
     void formsDeclaredReducibleAreSkipped() {
-        // e11 mod 5 is reducible: X_0(11) has a rational 5-torsion point, a_ℓ ≡ 1 + ℓ mod 5 (Mazur 1977 — from
-        // memory); the congruence with e21 is not examined either.
+        // e11 mod 5 is reducible, a_ℓ ≡ 1 + ℓ mod 5 (X_0(11) has a rational 5-torsion point): with PARI/GP,
+        // E=ellinit([0,-1,1,-10,-20]); select(l->l!=11 && (ellap(E,l)-1-l)%5, primes(200)) is empty.
+        // The congruence with e21 is not examined either.
         assertEquals(List.of(
                 "data/modp-weights.csv:2: note [table-format] form=e11 p=5: ρ̄ is declared reducible at "
                         + "data/reducible.csv:2; the weight recipes assume ρ̄ irreducible, so this row is not checked",
                 "data/modp-weights.csv:3:4: note [weight-of-form] form=e21 p=5: a_5 ≡ 3 mod 5: ordinary and no "
                         + "companion form of weight 4 is declared in congruences.csv: assumed non-split at 5 (Gross "
-                        + "1990); write local=split if it splits"), Scenario.weights("e11,5,,,,,,", "e21,5,,,,,,")
+                        + "1990); write local=split if it splits"),
+                Scenario.weights("e11,5,,,,,,", "e21,5,,,,,,")
                 .congruences("e11,e21,5,0").reducible("e11,5,0,1").lines(dir));
     }
 
@@ -296,7 +310,8 @@ class WeightChecksTest {
                         + "found an empty cell; p = 11 divides the level 11: a_p decides ρ̄|I_p only for 2 ≤ k ≤ p + 1 "
                         + "and p ∤ N (Deligne, Fontaine), so describe ρ̄ at p in 'shape' and 'exponents'",
                 "data/modp-weights.csv:4:1: error [table-format] form=e11 p=61: expected a_61 in the "
-                        + "coefficient tables, found none; a_61 of e11 is needed to tell ordinary from supersingular at 61"), Scenario.weights("w18,13,,,,,,", "e11,11,,,,,,", "e11,61,,,,,,",
+                        + "coefficient tables, found none; a_61 of e11 is needed to tell ordinary from supersingular at 61"),
+                Scenario.weights("w18,13,,,,,,", "e11,11,,,,,,", "e11,61,,,,,,",
                 "f23,11,,,,,,", "e11,19,,,,(0,0);(18,0),,").lines(dir));
     }
 
