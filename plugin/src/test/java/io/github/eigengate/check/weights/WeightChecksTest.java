@@ -331,6 +331,24 @@ class WeightChecksTest {
     }
 
     @Test
+    void congruencesMatchRowsByTheirNamedPrimes() {
+        // A made-up twisted congruence at 43 between f23 at its inert prime (supersingular: a_43 ≡ 0, see the class
+        // comment) and e11, ordinary at 43 (a_43 = -6 ≡ 37 mod 43, theory/serre/ap-mod-p.csv): both have
+        // W = {(0,0),(42,0)} (weight 2, peu ramifié or supersingular) and a twist by det^1 cannot match.
+        String weights = Scenario.WEIGHTS_HEADER + "f23,43,x^2 + 42*x + 42,,,,,\ne11,43,,nonsplit,,,,\n";
+        String matched = "form,other,p,twist,prime\nf23,e11,43,1,x^2 + 42*x + 42\n";
+        List<String> lines = Scenario.weights().file("modp-weights.csv", weights).file("congruences.csv", matched)
+                .lines(dir);
+        assertEquals(1, lines.size(), String.join("\n", lines));
+        assertTrue(lines.get(0).startsWith("data/congruences.csv:2: error [weight-congruence] congruence=f23~e11 "
+                + "p=43: expected (0,1);(42,1), found (0,0);(42,0); missing (0,1);(42,1), extra (0,0);(42,0); "
+                + "a_ℓ(f23) ≡ ℓ^1 a_ℓ(e11) mod 43"), lines.get(0));
+        String otherPrime = "form,other,p,twist,prime\nf23,e11,43,1,x^2 + 1\n";
+        assertEquals(List.of(), Scenario.weights().file("modp-weights.csv", weights)
+                .file("congruences.csv", otherPrime).lines(dir.resolve("other")));
+    }
+
+    @Test
     void theGateRegistersTheFourChecks() {
         assertTrue(io.github.eigengate.engine.Gate.knownIds().containsAll(WeightChecks.IDS));
         Report r = Datasets.run(Datasets.write(dir, "forms.csv", "id,level,weight\ne11,11,2\n", "coefficients.csv",
