@@ -28,16 +28,17 @@ import java.util.TreeSet;
  * that {@code modp-weights.csv} needs (nothing else of the coefficients), then turns every row into the local shape
  * of ρ̄ at p.
  *
- * <p>From a form of weight k and level N with p ∤ N and 2 ≤ k ≤ p + 1 (Edixhoven, Invent. Math. 109 (1992), §2):
+ * <p>From a form of weight k and level N with p ∤ N and 2 ≤ k ≤ p + 1 (Edixhoven, Invent. Math. 109 (1992), §2;
+ * theorem numbers as in {@code theory.serre}, from memory):
  * <ul>
  *   <li>a_p ≡ 0 mod 𝔭 (supersingular): ρ̄|I_p ≅ ω₂^{k−1} ⊕ ω₂^{p(k−1)} (Fontaine; Edixhoven Thm 2.6);</li>
- *   <li>otherwise (ordinary): ρ̄|G_p ≅ (ω^{k−1}·λ(β⁻¹) * ; 0 λ(β)) with λ unramified (Deligne; Edixhoven Thm 2.5),
- *       so ρ̄|I_p ≅ (ω^{k−1} * ; 0 1). Whether * vanishes is not in a_p: it is read from {@code local}; failing
- *       that, for 2 ≤ k ≤ p − 1 it is split exactly when a companion form is declared (Gross, Duke Math. J. 61
- *       (1990); Coleman–Voloch, Invent. Math. 110 (1992)), and otherwise assumed non-split with a note. For
- *       k = p + 1, ρ̄ is taken peu ramifié when a congruence (twist 0) with a weight-2 form of level prime to p is
- *       declared (then ρ̄ arises in weight 2, Serre 1987 §2 / Edixhoven Thm 4.5), and otherwise assumed très
- *       ramifié with a note.</li>
+ *   <li>otherwise (ordinary): ρ̄|G_p ≅ (ω^{k−1}·λ(a_p⁻¹) * ; 0 λ(a_p)) with λ(c) unramified, Frob_p ↦ c
+ *       (Deligne; Edixhoven Thm 2.5), so ρ̄|I_p ≅ (ω^{k−1} * ; 0 1). Whether * vanishes is not in a_p: it is read
+ *       from {@code local}; failing that, for 2 ≤ k ≤ p − 1 it is split exactly when a companion form is declared
+ *       (Gross, Duke Math. J. 61 (1990); Coleman–Voloch, Invent. Math. 110 (1992); volume numbers from memory),
+ *       and otherwise assumed non-split with a note. For k = p + 1, ρ̄ is taken peu ramifié when a congruence
+ *       (twist 0) with a weight-2 form of level prime to p is declared (then ρ̄ arises in weight 2; Serre 1987, §2,
+ *       Edixhoven 1992, §4 — from memory), and otherwise assumed très ramifié, the generic case, with a note.</li>
  * </ul>
  * Gross's companion relation, as declared in {@code congruences.csv} (a_ℓ(form) ≡ ℓ^j a_ℓ(other) mod p): the two
  * weights add up to p + 1, both levels are prime to p and j ≡ k_form − 1 mod p − 1; in either order, since
