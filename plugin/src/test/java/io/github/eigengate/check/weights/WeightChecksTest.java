@@ -349,6 +349,34 @@ class WeightChecksTest {
     }
 
     @Test
+    void weightPPlusOneIsPeuRamifieWhenACongruenceToWeightTwoIsDeclared() {
+        // h11 (level 11, weight 8, field x^2 - 15) ≡ e11 mod (7, x + 6), twist 0 (weights.gp); a_7(h11) = 164x - 614
+        // ≡ 5 there: ordinary of weight p + 1. Arising in weight 2, ρ̄ is peu ramifié and k(ρ̄) = 2 (Serre 1987, §2;
+        // Edixhoven 1992, §4 — from memory), W = {(0,0),(6,0)}; at (7, x + 1), where no congruence is declared
+        // (a_7 ≡ 6), très ramifié is assumed and noted. Declaring k(ρ̄) = 8 at the first prime is caught.
+        String weights = Scenario.WEIGHTS_HEADER + "h11,7,x + 6,,2,\"(0,0);(6,0)\",,\n"
+                + "h11,7,x + 1,,8,\"(6,0)\",,\ne11,7,,,2,\"(0,0);(6,0)\",,\n";
+        String congruences = "form,other,p,twist,prime\nh11,e11,7,0,x + 6\n";
+        List<String> lines = Scenario.weights().file("modp-weights.csv", weights).file("congruences.csv", congruences)
+                .lines(dir);
+        assertEquals(List.of(
+                "data/modp-weights.csv:3:4: note [weight-of-form] form=h11 p=7 prime=x + 1: a_7 ≡ 6 mod (7, x + 1): "
+                        + "ordinary of weight p + 1 = 8 with no 'local' and no congruence to a weight-2 form of level "
+                        + "prime to 7: assumed très ramifié (then k(ρ̄) = 8); write local=nonsplit if ρ̄ is peu "
+                        + "ramifié (then k(ρ̄) = 2)",
+                "data/modp-weights.csv:4:4: note [weight-of-form] form=e11 p=7: a_7 ≡ 5 mod 7: ordinary and no "
+                        + "companion form of weight 6 is declared in congruences.csv: assumed non-split at 7 (Gross "
+                        + "1990); write local=split if it splits"), lines);
+        String planted = weights.replace("h11,7,x + 6,,2,", "h11,7,x + 6,,8,");
+        List<String> bad = Scenario.weights().file("modp-weights.csv", planted).file("congruences.csv", congruences)
+                .lines(dir.resolve("bad"));
+        assertEquals("data/modp-weights.csv:2:5: error [serre-weight] form=h11 p=7 prime=x + 6: expected 2, found 8; "
+                + "Serre's weight of ρ̄ with ρ̄|I_7 ≅ (ω^1 * ; 0 ω^0) non-split, peu ramifié [a_7 ≡ 5 mod (7, x + 6): "
+                + "ordinary (Deligne), peu ramifié: congruent to a weight-2 form at data/congruences.csv:2] (Serre "
+                + "1987, §2)", bad.get(0));
+    }
+
+    @Test
     void theGateRegistersTheFourChecks() {
         assertTrue(io.github.eigengate.engine.Gate.knownIds().containsAll(WeightChecks.IDS));
         Report r = Datasets.run(Datasets.write(dir, "forms.csv", "id,level,weight\ne11,11,2\n", "coefficients.csv",
