@@ -17,6 +17,7 @@ import io.github.eigengate.theory.serre.Weight;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.HashMap;
+import java.util.IdentityHashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -61,13 +62,11 @@ final class Analysis {
     /** Weights k beyond this are not expanded into Jordan–Hölder constituents (the check is skipped). */
     static final int MAX_EXPANDED_WEIGHT = 1_000_000;
 
-    private final Catalog catalog;
     private final WeightTable table;
     private final Map<String, List<WeightRow>> need = new HashMap<>();
-    private final Map<WeightRow, Ap> ap = new HashMap<>();
+    private final Map<WeightRow, Ap> ap = new IdentityHashMap<>();
 
     Analysis(Catalog catalog) {
-        this.catalog = catalog;
         this.table = WeightTable.read(catalog);
         for (WeightRow row : table.rows()) {
             if (row.form() != null && smallWeight(row.form(), row.p())) {
@@ -310,9 +309,5 @@ final class Analysis {
                                       String reason) {
         return new Finding(Problems.CHECK_ID, Severity.ERROR, at, new Subject("table", at.file(), row.label()),
                 expected, found, reason);
-    }
-
-    Catalog catalog() {
-        return catalog;
     }
 }
