@@ -185,3 +185,75 @@ fx_spaces_dataset(dir, script, spaces, B, red, lines) =
   fx_check_files(dir, forms);
   forms;
 }
+
+\\ ---- congruence helpers (used by congruences.gp, modp.gp, example.gp) ----
+
+\\ Records for a list of [N, k, i] (i-th form of mfeigenbasis(mfinit([N,k,1],0))), a_n for n <= B,
+\\ each space computed once.
+fx_pick(list, B) =
+{
+  my(sp = Set(apply(t -> [t[1], t[2]], list)), cache = Map(), res);
+  for (s = 1, #sp, mapput(cache, sp[s], fx_space(sp[s][1], sp[s][2], B, 0)));
+  res = vector(#list, t, mapget(cache, [list[t][1], list[t][2]])[list[t][3]]);
+  res;
+}
+
+fx_find(forms, id) = for (i = 1, #forms, if (forms[i][1] == id, return(forms[i]))); fx_err(Str("no form ", id));
+
+\\ Record r truncated to a_1..a_B.
+fx_trunc(r, B) = [r[1], r[2], r[3], r[4], r[5][1..B], r[6]];
+
+\\ p-part of the index [O_K : Z[x]] of K = Q[x]/(Q) is trivial (needed so that the prime
+\\ above p is named by a factor of Q mod p: Dedekind's criterion, Cohen GTM 138, Thm. 4.8.13).
+fx_p_maximal(Q, p) = valuation(poldisc(Q), p) == valuation(nfdisc([Q, [p]]), p);
+
+\\ Reduction of a_n of record r modulo the prime (p, q(x)) above p: an intmod for rational
+\\ forms or degree-1 q, else a polmod in F_p[x]/(q). q = 0 for rational forms.
+fx_red(r, n, p, q) =
+{
+  my(c = r[5][n]);
+  if (r[4] == 0, return(Mod(c, p)));
+  if (denominator(content(c)) % p == 0, fx_err(Str(r[1], ": p divides a denominator of a_", n)));
+  if (poldegree(q) == 1, return(Mod(subst(c, 'x, -polcoef(q, 0)), p)));
+  Mod(c * Mod(1, p), q * Mod(1, p));
+}
+
+\\ Checks that q names a prime above p in the field of r (or is 0 for a rational r).
+fx_check_prime(r, p, q) =
+{
+  if (r[4] == 0, if (q != 0, fx_err(Str(r[1], ": prime given for a rational form"))); return);
+  if (q == 0, fx_err(Str(r[1], ": prime missing")));
+  if (pollead(q) != 1 || !polisirreducible(q * Mod(1, p)), fx_err(Str("prime ", q, " not monic irreducible mod ", p)));
+  if ((r[4] * Mod(1, p)) % (q * Mod(1, p)) != 0, fx_err(Str("prime ", q, " does not divide the field polynomial of ", r[1], " mod ", p)));
+  if (!fx_p_maximal(r[4], p), fx_err(Str("p divides the index of Z[x] for ", r[1])));
+}
+
+\\ First prime l <= B, l not dividing p*N_f*N_g, with a_l(f) != l^j a_l(g) mod the given primes; 0 if none.
+fx_cong_first_failure(f, g, p, j, q, qg, B) =
+{
+  my(NN = p * f[2] * g[2]);
+  forprime (l = 2, B, if (NN % l == 0, next);
+    if (fx_red(f, l, p, q) - Mod(l, p)^j * fx_red(g, l, p, qg) != 0, return(l)));
+  0;
+}
+
+\\ First prime l <= B, l not dividing p*N, with a_l(f) != l^i + l^j mod the prime; 0 if none.
+fx_red_first_failure(f, p, i, j, q, B) =
+{
+  forprime (l = 2, B, if ((p * f[2]) % l == 0, next);
+    if (fx_red(f, l, p, q) - Mod(l, p)^i - Mod(l, p)^j != 0, return(l)));
+  0;
+}
+
+\\ A prime l not dividing p*N with a_l^2 - 4 l^(k-1) a non-square mod p (rational form r, odd p):
+\\ then x^2 - a_l x + l^(k-1) has no root in F_p, so rho_{f,p}-bar is irreducible (it would
+\\ otherwise have F_p-rational characters as constituents). 0 if none below B.
+fx_irr_witness(r, p, B) =
+{
+  if (r[4] != 0 || p == 2, return(0));
+  forprime (l = 2, B, if ((p * r[2]) % l == 0, next);
+    my(d = Mod(r[5][l]^2 - 4 * l^(r[3] - 1), p)); if (d != 0 && !issquare(d), return(l)));
+  0;
+}
+
+fx_qstr(q) = if (q == 0, "", fx_fmt(q));

@@ -44,7 +44,7 @@ public final class FiniteField implements Field<FiniteField.Element> {
     }
 
     /** @return the prime field F_p, as {@code F_p[x]/(x)} */
-    public static FiniteField prime(long p) {
+    public static FiniteField primeField(long p) {
         return new FiniteField(FpPoly.x(p));
     }
 
@@ -70,7 +70,7 @@ public final class FiniteField implements Field<FiniteField.Element> {
 
     /** @return the image of the integer {@code n} */
     public Element fromLong(long n) {
-        return new Element(this, FpPoly.of(p, n));
+        return new Element(this, FpPoly.wrap(p, new long[] {Math.floorMod(n, p)}));
     }
 
     /**
@@ -106,7 +106,7 @@ public final class FiniteField implements Field<FiniteField.Element> {
      * The distinct roots in this field of a nonzero polynomial {@code h} with coefficients in F_p.
      * {@code h} is factored over F_p; each irreducible factor of degree {@code e} dividing {@code f}
      * has {@code e} roots, found by splitting it into linear factors over F_q with the
-     * Cantor–Zassenhaus method (von zur Gathen–Gerhard, Alg. 14.8, and the trace map in
+     * Cantor–Zassenhaus method (von zur Gathen–Gerhard, Alg. 14.8, and a trace map in
      * characteristic 2). Used to list the embeddings {@code F_p[x]/(u) -> F_q} of one residue field
      * into another.
      *

@@ -12,9 +12,9 @@ import java.util.Random;
  * stored as {@code long} values in {@code [0, p)}, lowest degree first, without leading zeros.
  *
  * <p>Factorisation follows von zur Gathen–Gerhard, <i>Modern Computer Algebra</i> (3rd ed.),
- * chapter 14: squarefree factorisation (§14.6), distinct-degree factorisation (Alg. 14.3) and
- * Cantor–Zassenhaus equal-degree splitting (Alg. 14.8, with the trace map of Exercise 14.16 in
- * characteristic 2). The random choices use a fixed seed, so results (which are sorted anyway) do not
+ * chapter 14: squarefree factorisation, distinct-degree factorisation (Alg. 14.3) and
+ * Cantor–Zassenhaus equal-degree splitting (Alg. 14.8; in characteristic 2 the quadratic character
+ * is replaced by the trace map {@code a + a^2 + ... + a^(2^(d-1))}, as in the same chapter). The random choices use a fixed seed, so results (which are sorted anyway) do not
  * vary between runs.
  */
 public final class FpPoly implements Comparable<FpPoly> {
@@ -37,9 +37,18 @@ public final class FpPoly implements Comparable<FpPoly> {
         return new FpPoly(p, n == c.length ? c : Arrays.copyOf(c, n));
     }
 
+    /** Moduli already found prime; bounded so that a long-running process cannot grow it without limit. */
+    private static final java.util.Set<Long> KNOWN_PRIMES = java.util.concurrent.ConcurrentHashMap.newKeySet();
+
     static void checkPrime(long p) {
+        if (KNOWN_PRIMES.contains(p)) {
+            return;
+        }
         if (p < 2 || p >= (1L << 31) || !BigInteger.valueOf(p).isProbablePrime(64)) {
             throw new IllegalArgumentException("modulus must be a prime below 2^31: " + p);
+        }
+        if (KNOWN_PRIMES.size() < 4096) {
+            KNOWN_PRIMES.add(p);
         }
     }
 
@@ -424,7 +433,7 @@ public final class FpPoly implements Comparable<FpPoly> {
     /**
      * @return whether this polynomial is irreducible over F_p (of degree at least 1, and not a
      *     product of two polynomials of lower degree). Test: {@code gcd(x^(p^i) - x, f) = 1} for
-     *     {@code 1 <= i <= deg f / 2} (Ben-Or; von zur Gathen–Gerhard, §14.9).
+     *     {@code 1 <= i <= deg f / 2} (Ben-Or's test; von zur Gathen–Gerhard, ch. 14).
      */
     public boolean isIrreducible() {
         int n = degree();
@@ -511,8 +520,8 @@ public final class FpPoly implements Comparable<FpPoly> {
     }
 
     /**
-     * Squarefree decomposition of a monic polynomial in characteristic p (von zur Gathen–Gerhard,
-     * Alg. 14.21 / Cohen GTM 138, Alg. 3.4.2): returns pairs (squarefree, i) whose product of i-th
+     * Squarefree decomposition of a monic polynomial in characteristic p (Cohen, GTM 138, §3.4.2:
+     * Yun's method, with p-th roots taken when the derivative vanishes): returns pairs (squarefree, i) whose product of i-th
      * powers is {@code f}; the squarefree parts are pairwise coprime.
      */
     static List<Factor> squarefreeFactorization(FpPoly f) {
@@ -596,7 +605,7 @@ public final class FpPoly implements Comparable<FpPoly> {
 
     /**
      * Cantor–Zassenhaus equal-degree splitting (von zur Gathen–Gerhard, Alg. 14.8; for p = 2 the
-     * trace map {@code a + a^2 + ... + a^(2^(d-1))}, Exercise 14.16).
+     * trace map {@code a + a^2 + ... + a^(2^(d-1))} replaces {@code a^((p^d - 1)/2)}).
      */
     private static List<FpPoly> equalDegree(FpPoly f, int d, Random rnd) {
         List<FpPoly> out = new ArrayList<>();

@@ -18,7 +18,7 @@ import java.util.List;
  * <p>Elements are stored on the power basis {@code 1, x, ..., x^(d-1)} as integer numerators over
  * one common positive denominator (in lowest terms), and products are reduced with a precomputed
  * table of {@code x^k mod f} for {@code d <= k <= 2d-2}; traces use the power sums of the roots of
- * {@code f}, precomputed by Newton's identities (Cohen, GTM 138, §4.3).
+ * {@code f}, precomputed by Newton's identities.
  */
 public final class NumberField implements Field<NumberField.Element> {
     private final QPoly f;
@@ -419,27 +419,85 @@ public final class NumberField implements Field<NumberField.Element> {
         }
 
         /**
-         * @return {@code 1/this}, computed by the Cayley–Hamilton theorem from the characteristic
-         *     polynomial {@code X^d + c_{d-1} X^{d-1} + ... + c_0}: {@code this^{-1} = -(this^{d-1} +
-         *     c_{d-1} this^{d-2} + ... + c_1) / c_0}
+         * @return {@code 1/this}: the solution {@code y} of {@code M y = e_0}, where {@code M} is the
+         *     matrix of multiplication by this element on the power basis (cleared of denominators),
+         *     by fraction-free Gaussian elimination (Bareiss, Math. Comp. 22 (1968); Cohen, GTM 138, §2.2) and
+         *     exact back substitution of {@code det(M) y}
          * @throws ArithmeticException if the norm is zero (this is zero, or {@code f} is reducible)
          */
         public Element inverse() {
             if (isZero()) {
                 throw new ArithmeticException("inverse of zero in " + field.name());
             }
-            QPoly cp = charPoly();
             int d = num.length;
-            Rational c0 = cp.coefficient(0);
-            if (c0.signum() == 0) {
-                throw new ArithmeticException(
-                        "element " + this + " has norm 0 in " + field.name() + ": the defining polynomial is reducible");
+            if (d == 1) {
+                return field.fromRational(Rational.of(num[0], den).inverse());
             }
-            Element b = field.one;
-            for (int k = d - 1; k >= 1; k--) {
-                b = b.multiply(this).add(field.fromRational(cp.coefficient(k)));
+            // integer matrix N = L * M, column j = coordinates of (num as element) * x^j scaled
+            Rational[] lower = new Rational[d];
+            for (int j = 0; j < d; j++) {
+                lower[j] = Rational.of(field.fNum[j], field.fDen);
             }
-            return b.scale(c0.inverse().negate());
+            Rational[][] cols = new Rational[d][];
+            Rational[] col = new Rational[d];
+            for (int i = 0; i < d; i++) {
+                col[i] = Rational.of(num[i]);
+            }
+            BigInteger l = BigInteger.ONE;
+            for (int j = 0; j < d; j++) {
+                cols[j] = col;
+                for (Rational r : col) {
+                    if (!r.isInteger()) {
+                        l = l.divide(l.gcd(r.den())).multiply(r.den());
+                    }
+                }
+                if (j + 1 < d) {
+                    col = timesX(col, lower);
+                }
+            }
+            // augmented [N | l * den * e_0]: (num/den) y = 1  <=>  (N/l) y = den e_0
+            BigInteger[][] m = new BigInteger[d][d + 1];
+            for (int i = 0; i < d; i++) {
+                for (int j = 0; j < d; j++) {
+                    Rational r = cols[j][i];
+                    m[i][j] = r.isInteger() ? r.num().multiply(l) : r.num().multiply(l.divide(r.den()));
+                }
+                m[i][d] = i == 0 ? l.multiply(den) : BigInteger.ZERO;
+            }
+            BigInteger prev = BigInteger.ONE;
+            for (int k = 0; k < d; k++) {
+                int piv = k;
+                while (piv < d && m[piv][k].signum() == 0) {
+                    piv++;
+                }
+                if (piv == d) {
+                    throw new ArithmeticException(
+                            "element " + this + " has norm 0 in " + field.name() + ": the defining polynomial is reducible");
+                }
+                if (piv != k) {
+                    BigInteger[] t = m[piv];
+                    m[piv] = m[k];
+                    m[k] = t;
+                }
+                for (int i = k + 1; i < d; i++) {
+                    for (int j = k + 1; j <= d; j++) {
+                        m[i][j] = m[k][k].multiply(m[i][j]).subtract(m[i][k].multiply(m[k][j])).divide(prev);
+                    }
+                    m[i][k] = BigInteger.ZERO;
+                }
+                prev = m[k][k];
+            }
+            // prev = ±det N; y_i = det * solution_i are integers (Cramer); back substitution is exact
+            BigInteger det = prev;
+            BigInteger[] y = new BigInteger[d];
+            for (int i = d - 1; i >= 0; i--) {
+                BigInteger acc = det.multiply(m[i][d]);
+                for (int j = i + 1; j < d; j++) {
+                    acc = acc.subtract(m[i][j].multiply(y[j]));
+                }
+                y[i] = acc.divide(m[i][i]);
+            }
+            return field.make(y, det);
         }
 
         /** @return {@code q * this} */
@@ -506,7 +564,7 @@ public final class NumberField implements Field<NumberField.Element> {
          * @return the characteristic polynomial of multiplication by this element on {@code K}
          *     (monic, of degree {@code d}). Computed from the power sums {@code p_k = Tr(a^k)}, {@code
          *     1 <= k <= d}, by Newton's identities {@code k e_k = sum_{i=1}^{k} (-1)^(i-1) e_{k-i}
-         *     p_i} (valid in characteristic 0; see Cohen, GTM 138, §4.3): {@code d - 1}
+         *     p_i} (Newton's identities, valid in characteristic 0): {@code d - 1}
          *     multiplications in {@code K} and {@code O(d^2)} rational operations.
          */
         public QPoly charPoly() {

@@ -74,6 +74,7 @@ final class PolyParser {
             }
             Rational c = Rational.ONE;
             boolean haveCoeff = false;
+            boolean fraction = false;
             if (Rational.isDigit(s[i])) {
                 c = Rational.of(digits());
                 haveCoeff = true;
@@ -89,6 +90,7 @@ final class PolyParser {
                         throw error("a nonzero denominator");
                     }
                     c = Rational.of(c.num(), d);
+                    fraction = true;
                 }
             }
             int exponent = 0;
@@ -121,7 +123,7 @@ final class PolyParser {
             }
             if (more() && !(s[i] == '+' || s[i] == '-')) {
                 if (exponent == 0 && !star) {
-                    throw error("'/', '*', 'x', '+', '-' or end of text");
+                    throw error(fraction ? "'*', 'x', '+', '-' or end of text" : "'/', '*', 'x', '+', '-' or end of text");
                 }
                 throw error(exponent == 1 && s[i - 1] == 'x' ? "'^', '+', '-' or end of text" : "'+', '-' or end of text");
             }

@@ -45,7 +45,7 @@ public final class QPoly {
      * coefficient ({@code 3} or {@code a/b}), an optional {@code *}, and an optional {@code x} with
      * an optional {@code ^} and nonnegative integer exponent. A leading sign is allowed, whitespace
      * is ignored anywhere and repeated powers are summed. Examples: {@code "x^2 - x - 1"}, {@code
-     * "3x"}, {@code "-x"}, {@code "7"}, {@code "1/2*x^3-x"}.
+     * "3x"}, {@code "-x"}, {@code "7"}, {@code "1/2*x^3-x"}. Exponents above 100000 are rejected.
      *
      * @throws ExpressionSyntaxException with the offset of the problem and what was expected there
      */
@@ -247,7 +247,7 @@ public final class QPoly {
 
     /**
      * @return the monic greatest common divisor; {@code gcd(0, 0) = 0}. Computed via the primitive
-     *     polynomial remainder sequence over Z (Cohen, GTM 138, Alg. 3.3.1) to avoid rational
+     *     polynomial remainder sequence over Z (Knuth, TAOCP vol. 2, §4.6.1) to avoid rational
      *     coefficient growth.
      */
     public QPoly gcd(QPoly o) {

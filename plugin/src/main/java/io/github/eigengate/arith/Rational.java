@@ -70,11 +70,6 @@ public final class Rational implements Comparable<Rational> {
         return new Rational(num, den);
     }
 
-    /** Package-private: builds from a pair already known to be canonical. */
-    static Rational ofCanonical(BigInteger num, BigInteger den) {
-        return num.signum() == 0 ? ZERO : new Rational(num, den);
-    }
-
     /**
      * Parses a rational number written without whitespace: an optional sign {@code +} or {@code -},
      * decimal digits, and optionally {@code /} followed by decimal digits (a nonzero denominator).
@@ -216,8 +211,13 @@ public final class Rational implements Comparable<Rational> {
      * @throws ArithmeticException if this is zero and {@code e < 0}
      */
     public Rational pow(int e) {
+        if (isInteger() && num.abs().equals(BigInteger.ONE)) {
+            return num.signum() > 0 || (e & 1) == 0 ? ONE : this;
+        }
         if (e < 0) {
-            return inverse().pow(-e);
+            Rational inv = inverse();
+            // -Integer.MIN_VALUE overflows: split off one factor
+            return e == Integer.MIN_VALUE ? inv.pow(Integer.MAX_VALUE).multiply(inv) : inv.pow(-e);
         }
         if (e == 0) {
             return ONE;

@@ -10,8 +10,11 @@ import java.util.List;
  * <p>For a squarefree polynomial {@code g} let {@code g_0 = g}, {@code g_1 = g'} and {@code g_{i+1}
  * = -rem(g_{i-1}, g_i)} until the remainder vanishes, and let {@code V(t)} be the number of sign
  * changes (zeros skipped) in {@code g_0(t), g_1(t), ...}. Sturm's theorem (Basu–Pollack–Roy,
- * <i>Algorithms in Real Algebraic Geometry</i>, §2.2.2, Thm. 2.50) says that for {@code a < b} the
- * number of roots of {@code g} in the half-open interval {@code (a, b]} is {@code V(a) - V(b)}.
+ * <i>Algorithms in Real Algebraic Geometry</i>, §2.2) says that for {@code a < b} the
+ * number of roots of {@code g} in the half-open interval {@code (a, b]} is {@code V(a) - V(b)}; this
+ * holds also when {@code a} or {@code b} is a root, because at a root {@code c} the term {@code g_0(c)
+ * = 0} is skipped while {@code g_0} and {@code g_1} have equal signs just right of {@code c}, so
+ * {@code V(c) = V(c+)}. The closed interval adds 1 if {@code g(a) = 0}.
  * Each {@code g_i} is replaced by a positive multiple with integer coefficients (pseudo-remainders
  * with positive multipliers, then division by the positive content), which changes no sign.
  * Everything is evaluated exactly at rational points; nothing is decided in floating point.
@@ -55,6 +58,44 @@ public final class RealRoots {
         }
         int distinct = f.squarefreePart().degree();
         return countDistinctRootsIn(f, lo, hi) == distinct;
+    }
+
+    /**
+     * Decides whether every complex root {@code α} of {@code f} is real with {@code α^2 <= c}, i.e.
+     * lies in {@code [-sqrt c, sqrt c]} — the shape of a Ramanujan–Petersson bound {@code |α| <= 2
+     * p^((k-1)/2)}, checked as {@code α^2 <= 4 p^(k-1)} without irrational interval ends. Uses the
+     * root-squaring (Graeffe) polynomial {@code F} with {@code F(x^2) = ± f(x) f(-x)}, whose roots are
+     * the {@code α^2}: the answer is yes iff all roots of {@code f} are real and all roots of {@code
+     * F} lie in {@code [0, c]}.
+     *
+     * @throws IllegalArgumentException if {@code f} is constant (or zero)
+     */
+    public static boolean allRootsRealWithSquareAtMost(QPoly f, Rational c) {
+        if (f.degree() < 1) {
+            throw new IllegalArgumentException("polynomial of degree >= 1 required, got " + f);
+        }
+        if (c.signum() < 0) {
+            return false;
+        }
+        QPoly g = f.squarefreePart();
+        if (countDistinctRealRoots(g) != g.degree()) {
+            return false;
+        }
+        QPoly fMinus = g.multiply(reflect(g));
+        Rational[] y = new Rational[g.degree() + 1];
+        for (int k = 0; k <= g.degree(); k++) {
+            y[k] = fMinus.coefficient(2 * k);
+        }
+        return allRootsRealIn(QPoly.of(y), Rational.ZERO, c);
+    }
+
+    /** @return {@code f(-x)} */
+    private static QPoly reflect(QPoly f) {
+        Rational[] r = new Rational[f.degree() + 1];
+        for (int k = 0; k <= f.degree(); k++) {
+            r[k] = k % 2 == 0 ? f.coefficient(k) : f.coefficient(k).negate();
+        }
+        return QPoly.of(r);
     }
 
     /** The Sturm sequence of the squarefree part of {@code f}, as positive integer multiples. */

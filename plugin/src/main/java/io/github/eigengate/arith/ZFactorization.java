@@ -10,8 +10,8 @@ import java.util.List;
  * Factorisation of polynomials over Q (equivalently, of primitive polynomials over Z) by
  * Zassenhaus' method: factor modulo a suitable prime p, lift the factorisation to p^a by Hensel's
  * lemma beyond the Landau–Mignotte bound, and recombine the lifted factors by trial division. See
- * von zur Gathen–Gerhard, <i>Modern Computer Algebra</i> (3rd ed.), §15.4–15.6 (Alg. 15.10 for the
- * Hensel step, Alg. 15.19 for recombination) and Cohen, GTM 138, §3.5.
+ * von zur Gathen–Gerhard, <i>Modern Computer Algebra</i> (3rd ed.), ch. 15 (Alg. 15.10 for the
+ * Hensel step; factor combination by trial division) and Cohen, GTM 138, §3.5.
  *
  * <p>Before lifting, several primes are tried: if the polynomial is irreducible modulo one of them
  * (a prime not dividing the leading coefficient nor the discriminant) it is irreducible over Q, and
@@ -231,7 +231,8 @@ public final class ZFactorization {
         for (BigInteger c : s) {
             norm2sq = norm2sq.add(c.multiply(c));
         }
-        BigInteger bound = norm2sq.sqrt().add(BigInteger.ONE).shiftLeft(n + 1);
+        BigInteger coeffBound = norm2sq.sqrt().add(BigInteger.ONE).shiftLeft(n);
+        BigInteger bound = coeffBound.shiftLeft(1);
         BigInteger bp = BigInteger.valueOf(p);
         BigInteger m = bp;
         while (m.compareTo(bound) <= 0) {
@@ -241,7 +242,7 @@ public final class ZFactorization {
         List<BigInteger[]> lifted = new ArrayList<>();
         liftTree(ZPoly.mod(s, m), bestFactors, p, m, lifted);
         // --- recombination
-        return recombine(s, lifted, m, possible);
+        return recombine(s, lifted, m, possible, coeffBound);
     }
 
     private static long nextPrime(long p) {
@@ -343,11 +344,15 @@ public final class ZFactorization {
     }
 
     /**
-     * Recombination of the lifted monic factors (von zur Gathen–Gerhard, Alg. 15.19 with trial
+     * Recombination of the lifted monic factors (von zur Gathen–Gerhard, ch. 15, with trial
      * division): subsets of increasing size {@code k}, candidate {@code b * prod u_i} in symmetric
-     * representation modulo {@code m}, accepted when it divides {@code b f} over Z.
+     * representation modulo {@code m}, accepted when it divides {@code b f} over Z. A true factor
+     * {@code h} gives the candidate {@code (b / lc h) h}, whose coefficients are at most {@code
+     * 2^n ||s||_2} in absolute value (Mignotte's factor bound, von zur Gathen–Gerhard §6.6, with
+     * {@code |b| <= |lc s|}); candidates beyond it are rejected without division.
      */
-    private static List<BigInteger[]> recombine(BigInteger[] f, List<BigInteger[]> u, BigInteger m, boolean[] possible) {
+    private static List<BigInteger[]> recombine(
+            BigInteger[] f, List<BigInteger[]> u, BigInteger m, boolean[] possible, BigInteger coeffBound) {
         List<BigInteger[]> out = new ArrayList<>();
         List<BigInteger[]> rest = new ArrayList<>(u);
         int k = 1;
@@ -377,7 +382,8 @@ public final class ZFactorization {
                             cand = ZPoly.mod(ZPoly.multiply(cand, rest.get(j)), m);
                         }
                         cand = ZPoly.symmetricMod(cand, m);
-                        BigInteger[] quotient = ZPoly.exactDivide(ZPoly.scale(f, b), cand);
+                        // a true factor's candidate obeys the Landau–Mignotte bound; most false ones do not
+                        BigInteger[] quotient = withinBound(cand, coeffBound) ? ZPoly.exactDivide(ZPoly.scale(f, b), cand) : null;
                         if (quotient != null) {
                             BigInteger[] h = ZPoly.primitivePart(cand);
                             out.add(h);
@@ -409,6 +415,15 @@ public final class ZFactorization {
             out.add(ZPoly.primitivePart(f));
         }
         return out;
+    }
+
+    private static boolean withinBound(BigInteger[] a, BigInteger bound) {
+        for (BigInteger c : a) {
+            if (c.abs().compareTo(bound) > 0) {
+                return false;
+            }
+        }
+        return true;
     }
 
     private static BigInteger symmetric(BigInteger c, BigInteger m) {

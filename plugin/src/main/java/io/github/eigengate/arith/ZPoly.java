@@ -189,6 +189,9 @@ final class ZPoly {
         }
         BigInteger[] u = primitivePart(a);
         BigInteger[] v = primitivePart(b);
+        if (u.length > 1 && v.length > 1 && coprimeModular(u, v)) {
+            return new BigInteger[] {BigInteger.ONE};
+        }
         if (u.length < v.length) {
             BigInteger[] t = u;
             u = v;
@@ -200,6 +203,28 @@ final class ZPoly {
             v = r;
         }
         return primitivePart(u);
+    }
+
+    /** Primes just below 2^31 used for the modular coprimality test. */
+    private static final long[] GCD_PRIMES = {2147483647L, 2147483629L, 2147483587L};
+
+    /**
+     * Sufficient test for {@code gcd(u, v) = 1} over Q: if {@code p} does not divide {@code lc(u)},
+     * the reduction of the gcd over Z divides the gcd of the reductions, so {@code deg gcd(u, v) <=
+     * deg gcd(u mod p, v mod p)}; a constant modular gcd proves coprimality. Avoids the coefficient
+     * growth of the remainder sequence in the common coprime case (e.g. squarefree tests).
+     */
+    static boolean coprimeModular(BigInteger[] u, BigInteger[] v) {
+        for (long p : GCD_PRIMES) {
+            BigInteger bp = BigInteger.valueOf(p);
+            if (lc(u).mod(bp).signum() == 0) {
+                continue;
+            }
+            if (ZFactorization.fp(u, p).gcd(ZFactorization.fp(v, p)).degree() == 0) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /**

@@ -12,7 +12,12 @@ final class Cells {
      * A decimal integer in [min, max], or {@code null} after reporting. Empty cells are reported as missing.
      */
     static Integer integer(CsvTable.Row row, String column, long min, long max, String subject, Problems problems) {
-        String text = row.get(column);
+        return integer(row, column, row.get(column), min, max, subject, problems);
+    }
+
+    /** As above, for a cell already read. */
+    static Integer integer(CsvTable.Row row, String column, String text, long min, long max, String subject,
+                           Problems problems) {
         if (text.isEmpty()) {
             problems.error(row.at(column), subject, "an integer in " + range(min, max), "an empty cell",
                     "the column '" + column + "' needs a value");
@@ -23,6 +28,12 @@ final class Cells {
                     "'" + column + "' must be a decimal integer");
             return null;
         }
+        if (text.length() <= 9) {
+            int v = Integer.parseInt(text);
+            if (v >= min && v <= max) {
+                return v;
+            }
+        }
         BigInteger v = new BigInteger(text);
         if (v.compareTo(BigInteger.valueOf(min)) < 0 || v.compareTo(BigInteger.valueOf(max)) > 0) {
             problems.error(row.at(column), subject, "an integer in " + range(min, max), text,
@@ -30,6 +41,23 @@ final class Cells {
             return null;
         }
         return v.intValueExact();
+    }
+
+    /** The value of a plain decimal of at most 9 digits that is ≥ 1, else -1 (the caller then reports). */
+    static int smallPositive(String s) {
+        int len = s.length();
+        if (len == 0 || len > 9) {
+            return -1;
+        }
+        int v = 0;
+        for (int i = 0; i < len; i++) {
+            char c = s.charAt(i);
+            if (c < '0' || c > '9') {
+                return -1;
+            }
+            v = v * 10 + (c - '0');
+        }
+        return v >= 1 ? v : -1;
     }
 
     static String range(long min, long max) {

@@ -36,6 +36,10 @@ public final class CoefficientReader {
     private final Map<String, Block<?>> held = new LinkedHashMap<>();
     private Block<?> current;
     private String unknownRun;
+    private CsvTable.Row layout;
+    private int formAt;
+    private int nAt;
+    private int valueAt;
 
     private CoefficientReader(Catalog catalog, Set<String> holdBack, Problems problems, Consumer<FormData<?>> out) {
         this.catalog = catalog;
@@ -66,7 +70,16 @@ public final class CoefficientReader {
     }
 
     private void row(CsvTable.Row row, String file) {
-        String id = row.get("form");
+        if (row != layout) { // a new file: its own column order
+            layout = row;
+            formAt = row.position("form");
+            nAt = row.position("n");
+            valueAt = row.position("value");
+        }
+        String id = row.get(formAt);
+        if (current == null && id.equals(unknownRun)) {
+            return; // the rest of an unknown form's run, reported at its first row
+        }
         if (current == null || !current.form.id().equals(id)) {
             endRun();
             startRun(row, id);
@@ -74,11 +87,16 @@ public final class CoefficientReader {
         if (current == null) {
             return;
         }
-        Integer n = Cells.integer(row, "n", 1, Integer.MAX_VALUE, "form=" + id, problems);
-        if (n == null) {
-            return;
+        String nText = row.get(nAt);
+        int n = Cells.smallPositive(nText);
+        if (n < 0) {
+            Integer checked = Cells.integer(row, "n", nText, 1, Integer.MAX_VALUE, "form=" + id, problems);
+            if (checked == null) {
+                return;
+            }
+            n = checked;
         }
-        current.add(n, row, file);
+        current.add(n, row.get(valueAt), row, file);
     }
 
     private void startRun(CsvTable.Row row, String id) {
@@ -141,8 +159,7 @@ public final class CoefficientReader {
             return new Block<>(form, k, (text, f) -> element(k, text, f), problems);
         }
 
-        void add(int n, CsvTable.Row row, String file) {
-            String text = row.get("value");
+        void add(int n, String text, CsvTable.Row row, String file) {
             String subject = "form=" + form.id() + " n=" + n;
             if (text.isEmpty()) {
                 problems.error(row.at("value"), subject, expectation(form), "an empty cell", "a_" + n + " is missing");
@@ -195,7 +212,7 @@ public final class CoefficientReader {
         if (!Cells.isInteger(s)) {
             return "the form has rational coefficients (no field), so a_n must be an integer";
         }
-        return Rational.of(new BigInteger(s));
+        return s.length() <= 18 ? Rational.of(Long.parseLong(s)) : Rational.of(new BigInteger(s));
     }
 
     private static Object element(NumberField k, String text, Form form) {

@@ -33,7 +33,6 @@ public final class CsvTable {
             .setSkipHeaderRecord(true)
             .setCommentMarker('#')
             .setIgnoreEmptyLines(true)
-            .setIgnoreSurroundingSpaces(true)
             .setDuplicateHeaderMode(DuplicateHeaderMode.DISALLOW)
             .get();
 
@@ -75,7 +74,7 @@ public final class CsvTable {
         try (BufferedReader in = new BufferedReader(new InputStreamReader(Files.newInputStream(path), decoder),
                 1 << 16);
              CSVParser parser = CSVParser.builder().setReader(in).setFormat(FORMAT).get()) {
-            List<String> header = parser.getHeaderNames();
+            List<String> header = parser.getHeaderNames().stream().map(String::strip).toList();
             int headerLine = (int) Math.max(1, parser.getCurrentLineNumber());
             if (header.isEmpty()) {
                 problems.error(SourceLocation.file(display), "table=" + display, "a header row", "an empty file",
@@ -107,6 +106,7 @@ public final class CsvTable {
             }
             Row row = new Row(index);
             Iterator<CSVRecord> records = parser.iterator();
+            long previousEnd = parser.getCurrentLineNumber();
             while (true) {
                 CSVRecord record;
                 try {
@@ -119,7 +119,18 @@ public final class CsvTable {
                             "RFC 4180 CSV", "malformed CSV", "the file cannot be parsed here: " + causeText(e));
                     return false;
                 }
-                row.set(record, startLine(record, parser.getCurrentLineNumber()));
+                long end = parser.getCurrentLineNumber();
+                // a record right after the previous one, on one line, starts where it ends
+                row.set(record, end - previousEnd == 1 ? (int) end : startLine(record, end));
+                previousEnd = end;
+                int spaced = spaceBeforeQuote(record);
+                if (spaced >= 0) {
+                    problems.error(new SourceLocation(display, row.line(), spaced + 1), "table=" + display,
+                            "a quote right after the comma", record.get(spaced),
+                            "a quoted cell must start right after the comma (RFC 4180): remove the space before the "
+                                    + "quote; the row is skipped");
+                    continue;
+                }
                 each.accept(row);
             }
             return true;
@@ -145,6 +156,17 @@ public final class CsvTable {
     private static String causeText(Throwable e) {
         String m = e.getMessage();
         return m == null ? e.getClass().getSimpleName() : m;
+    }
+
+    /** The position of a cell written {@code , "..."}, which RFC 4180 does not read as quoted, or -1. */
+    private static int spaceBeforeQuote(CSVRecord record) {
+        for (int i = 0; i < record.size(); i++) {
+            String v = record.get(i);
+            if (!v.isEmpty() && Character.isWhitespace(v.charAt(0)) && v.strip().startsWith("\"")) {
+                return i;
+            }
+        }
+        return -1;
     }
 
     /** The parser reports the line where a record ends; quoted line breaks inside it move the start up. */
@@ -182,10 +204,21 @@ public final class CsvTable {
         /** The stripped cell, or "" when the column is absent or the row is short. */
         public String get(String column) {
             Integer i = index.get(column);
-            if (i == null || i >= record.size()) {
+            return i == null ? "" : get(i);
+        }
+
+        /** The stripped cell at a 0-based position (see {@link #position}), "" when the row is short. */
+        public String get(int position) {
+            if (position < 0 || position >= record.size()) {
                 return "";
             }
-            return record.get(i).strip();
+            return record.get(position).strip();
+        }
+
+        /** The 0-based position of a column, or -1. */
+        public int position(String column) {
+            Integer i = index.get(column);
+            return i == null ? -1 : i;
         }
 
         public int line() {

@@ -6,6 +6,8 @@ import io.github.eigengate.check.form.HeckeRelations;
 import io.github.eigengate.check.form.LevelPrimes;
 import io.github.eigengate.check.form.Normalisation;
 import io.github.eigengate.check.form.RamanujanBound;
+import io.github.eigengate.check.space.SpaceDimension;
+import io.github.eigengate.check.space.SpaceTraces;
 import io.github.eigengate.check.weights.WeightChecks;
 import java.util.ArrayList;
 import java.util.List;
@@ -22,7 +24,9 @@ public final class Checks {
                 new FieldSanity(),
                 new HeckeRelations(),
                 new RamanujanBound(),
-                new LevelPrimes()));
+                new LevelPrimes(),
+                new SpaceDimension(),
+                new SpaceTraces()));
         checks.addAll(WeightChecks.all(settings.skip()));
         return List.copyOf(checks);
     }

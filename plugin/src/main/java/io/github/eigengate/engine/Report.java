@@ -35,10 +35,10 @@ public record Report(List<String> datasets, List<String> checks, List<Finding> f
     /** The count line printed before the findings. */
     public String summary() {
         return String.format("%d error%s, %d warning%s, %d note%s in %d dataset%s (%d forms, %d coefficient rows, "
-                        + "%d checks)%s",
+                        + "%d check%s)%s",
                 errors(), errors() == 1 ? "" : "s", warnings(), warnings() == 1 ? "" : "s", notes(),
                 notes() == 1 ? "" : "s", datasets.size(), datasets.size() == 1 ? "" : "s", forms, rows,
-                checks.size(), notKept > 0 ? "; " + notKept + " findings beyond the first " + findings.size()
+                checks.size(), checks.size() == 1 ? "" : "s", notKept > 0 ? "; " + notKept + " findings beyond the first " + findings.size()
                         + " are counted but not listed" : "");
     }
 }

@@ -59,9 +59,9 @@ class FiniteFieldTest {
     void fieldAxioms() {
         Random rnd = new Random(77L);
         List<FiniteField> fields = List.of(
-                FiniteField.prime(2),
-                FiniteField.prime(3),
-                FiniteField.prime(101),
+                FiniteField.primeField(2),
+                FiniteField.primeField(3),
+                FiniteField.primeField(101),
                 field(2, "x^5 + x^2 + 1"),
                 field(3, "x^4 + 2*x^3 + 2"),
                 field(101, "x + 7"));
@@ -82,7 +82,7 @@ class FiniteFieldTest {
         assertEquals(5, f32.degree());
         assertEquals(BigInteger.valueOf(32), f32.order());
         assertEquals("F_2[x]/(x^5 + x^2 + 1)", f32.name());
-        assertEquals("F_7", FiniteField.prime(7).name());
+        assertEquals("F_7", FiniteField.primeField(7).name());
         assertEquals("x", f32.generator().toString());
         assertEquals(f32.one(), f32.generator().pow(BigInteger.valueOf(31)));
         assertEquals(f32.fromLong(1), f32.fromLong(-1));
@@ -92,7 +92,7 @@ class FiniteFieldTest {
         assertEquals(f7.fromLong(2), f7.fromInteger(BigInteger.valueOf(-5)));
         assertThrows(IllegalArgumentException.class, () -> field(3, "x^4 + 1"));
         assertThrows(IllegalArgumentException.class, () -> field(3, "2x^2 + 1"));
-        assertThrows(IllegalArgumentException.class, () -> f32.add(f32.one(), FiniteField.prime(2).one()));
+        assertThrows(IllegalArgumentException.class, () -> f32.add(f32.one(), FiniteField.primeField(2).one()));
         IllegalArgumentException e =
                 assertThrows(IllegalArgumentException.class, () -> f32.multiply(f32.one(), field(2, "x^5 + x^3 + 1").one()));
         assertTrue(e.getMessage().contains("x^5 + x^2 + 1") && e.getMessage().contains("x^5 + x^3 + 1"), e.getMessage());

@@ -17,8 +17,18 @@ class FpPolyTest {
     /** Fixture: PARI/GP {@code factormod(f,p)}; the gp script is at the top of factormod.csv. */
     @Test
     void factorisationsAgreeWithPari() {
+        assertEquals(36, checkFactorisations("factormod.csv"));
+    }
+
+    /** Fixture: PARI/GP {@code factormod(f,p)} on seeded random input; script at the top of factormod-random.csv. */
+    @Test
+    void randomFactorisationsAgreeWithPari() {
+        assertEquals(60, checkFactorisations("factormod-random.csv"));
+    }
+
+    private static int checkFactorisations(String file) {
         int rows = 0;
-        for (String[] row : Fixtures.rows("factormod.csv")) {
+        for (String[] row : Fixtures.rows(file)) {
             long p = Long.parseLong(row[1]);
             FpPoly f = FpPoly.parse(row[0], p);
             Set<String> expected = new HashSet<>();
@@ -39,7 +49,7 @@ class FpPolyTest {
             }
             rows++;
         }
-        assertEquals(36, rows);
+        return rows;
     }
 
     @Test

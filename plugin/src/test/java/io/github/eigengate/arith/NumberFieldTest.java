@@ -186,6 +186,25 @@ class NumberFieldTest {
         });
     }
 
+    /** Fixture: PARI/GP charpoly/norm/trace/inverse/power of Mod(a,f); script at the top of number-field-random.csv. */
+    @Test
+    void randomElementsAgreeWithPari() {
+        int rows = 0;
+        for (String[] row : Fixtures.rows("number-field-random.csv")) {
+            NumberField k = NumberField.of(p(row[0]));
+            NumberField.Element a = k.element(p(row[1]));
+            String ctx = String.join(";", row);
+            assertEquals(p(row[2]), a.charPoly(), ctx);
+            assertEquals(q(row[3]), a.norm(), ctx);
+            assertEquals(q(row[4]), a.trace(), ctx);
+            assertEquals(k.element(p(row[5])), a.inverse(), ctx);
+            assertEquals(k.element(p(row[6])), a.pow(5), ctx);
+            assertEquals(k.element(p(row[5])).pow(5), a.pow(-5), ctx);
+            rows++;
+        }
+        assertEquals(36, rows);
+    }
+
     @Test
     void multiplicativityOnRandomElements() {
         Random rnd = new Random(31337L);

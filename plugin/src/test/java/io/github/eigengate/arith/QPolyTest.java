@@ -74,6 +74,20 @@ class QPolyTest {
         assertEquals(0, e.offset());
         e = assertThrows(ExpressionSyntaxException.class, () -> p("x^2 -- 1"));
         assertEquals(5, e.offset());
+        e = assertThrows(ExpressionSyntaxException.class, () -> p("3/4/5"));
+        assertEquals(3, e.offset());
+        assertEquals("'*', 'x', '+', '-' or end of text", e.expected());
+        e = assertThrows(ExpressionSyntaxException.class, () -> p("3 y"));
+        assertEquals(2, e.offset());
+        assertEquals("'/', '*', 'x', '+', '-' or end of text", e.expected());
+        e = assertThrows(ExpressionSyntaxException.class, () -> p("3x2"));
+        assertEquals(2, e.offset());
+        assertEquals("'^', '+', '-' or end of text", e.expected());
+        e = assertThrows(ExpressionSyntaxException.class, () -> p("x^2x"));
+        assertEquals(3, e.offset());
+        assertEquals("'+', '-' or end of text", e.expected());
+        e = assertThrows(ExpressionSyntaxException.class, () -> p("3*"));
+        assertEquals(2, e.offset());
         e = assertThrows(ExpressionSyntaxException.class, () -> p("x^999999999"));
         assertEquals(2, e.offset());
     }

@@ -73,6 +73,10 @@ class RationalTest {
         assertEquals(Rational.parse("-27/64"), a.pow(3));
         assertEquals(Rational.ONE, a.pow(0));
         assertEquals(Rational.ONE, Rational.ZERO.pow(0));
+        assertEquals(Rational.ONE, Rational.ONE.pow(Integer.MIN_VALUE));
+        assertEquals(Rational.ONE, Rational.of(-1).pow(Integer.MIN_VALUE));
+        assertEquals(Rational.of(-1), Rational.of(-1).pow(Integer.MAX_VALUE));
+        assertThrows(ArithmeticException.class, () -> Rational.of(2).pow(Integer.MIN_VALUE));
         assertThrows(ArithmeticException.class, () -> Rational.ZERO.inverse());
         assertThrows(ArithmeticException.class, () -> Rational.ZERO.pow(-1));
         assertThrows(ArithmeticException.class, () -> a.divide(Rational.ZERO));

@@ -38,6 +38,20 @@ class RealRootsTest {
         }
     }
 
+    /** Fixture: PARI/GP {@code polsturm} on seeded random polynomials and intervals; script at the top of the file. */
+    @Test
+    void randomPolynomialsAgreeWithPari() {
+        int n = 0;
+        for (String[] row : Fixtures.rows("real-roots-random.csv")) {
+            QPoly f = p(row[0]);
+            String ctx = String.join(";", row);
+            assertEquals(Integer.parseInt(row[3]), RealRoots.countDistinctRootsIn(f, q(row[1]), q(row[2])), ctx);
+            assertEquals(Integer.parseInt(row[4]), RealRoots.countDistinctRealRoots(f), ctx);
+            n++;
+        }
+        assertEquals(50, n);
+    }
+
     @Test
     void allRootsRealIn() {
         assertTrue(RealRoots.allRootsRealIn(p("x^2 - 2"), q("-2"), q("2")));
@@ -52,6 +66,28 @@ class RealRootsTest {
         assertFalse(RealRoots.allRootsRealIn(p("x - 5/3"), q("0"), q("3/2")));
         assertThrows(IllegalArgumentException.class, () -> RealRoots.allRootsRealIn(p("7"), q("0"), q("1")));
         assertThrows(IllegalArgumentException.class, () -> RealRoots.allRootsRealIn(QPoly.ZERO, q("0"), q("1")));
+    }
+
+    @Test
+    void rootsWithBoundedSquares() {
+        // roots ±sqrt2: squares exactly 2
+        assertTrue(RealRoots.allRootsRealWithSquareAtMost(p("x^2 - 2"), q("2")));
+        assertFalse(RealRoots.allRootsRealWithSquareAtMost(p("x^2 - 2"), q("199/100")));
+        // roots 1 and -3 (double): squares 1 and 9
+        assertTrue(RealRoots.allRootsRealWithSquareAtMost(p("x^3 + 5x^2 + 3x - 9"), q("9")));
+        assertFalse(RealRoots.allRootsRealWithSquareAtMost(p("x^3 + 5x^2 + 3x - 9"), q("8")));
+        // complex roots ±i are rejected whatever the bound
+        assertFalse(RealRoots.allRootsRealWithSquareAtMost(p("x^2 + 1"), q("100")));
+        assertFalse(RealRoots.allRootsRealWithSquareAtMost(p("x - 1"), q("-1")));
+        assertTrue(RealRoots.allRootsRealWithSquareAtMost(p("x"), q("0")));
+        assertThrows(IllegalArgumentException.class, () -> RealRoots.allRootsRealWithSquareAtMost(p("3"), q("1")));
+        // Ramanujan's tau: tau(2) = -24 (OEIS A000594; gp: ramanujantau(2) -> -24), so x^2 + 24x + 2^11 has |roots| = 2^(11/2)
+        // (non-real); the real-root form of the bound is tau(2)^2 <= 4 * 2^11 = 8192: 576 <= 8192.
+        assertTrue(RealRoots.allRootsRealWithSquareAtMost(p("x + 24"), q("8192")));
+        assertFalse(RealRoots.allRootsRealWithSquareAtMost(p("x + 24"), q("575")));
+        // golden-ratio field: roots (1 ± sqrt5)/2, squares (3 ± sqrt5)/2; gp: ((1+sqrt(5))/2)^2 -> 2.6180339887...
+        assertTrue(RealRoots.allRootsRealWithSquareAtMost(p("x^2 - x - 1"), q("262/100")));
+        assertFalse(RealRoots.allRootsRealWithSquareAtMost(p("x^2 - x - 1"), q("261/100")));
     }
 
     @Test

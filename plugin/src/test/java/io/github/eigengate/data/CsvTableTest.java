@@ -13,13 +13,13 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-class CsvTableTest {
+public class CsvTableTest {
 
     @TempDir
     Path dir;
 
     /** Records what a reader reports, as strings. */
-    static final class Recorded implements Problems {
+    public static final class Recorded implements Problems {
         final List<String> errors = new ArrayList<>();
         final List<String> warnings = new ArrayList<>();
 
@@ -104,5 +104,20 @@ class CsvTableTest {
         assertEquals(1, p.errors.size());
         assertTrue(p.errors.get(0).startsWith("t.csv:1 table=t.csv | a header row of distinct names"),
                 p.errors.get(0));
+    }
+
+    @Test
+    void aSpaceBeforeAQuoteIsReportedAndTheRowSkipped() {
+        Recorded p = new Recorded();
+        List<String> seen = lines("a,b\n1, \"x, y\"\n2,\"z\"\n", List.of("a", "b"), List.of(), p);
+        assertEquals(List.of("3:2/z@2"), seen);
+        assertEquals(List.of("t.csv:2:2 table=t.csv | a quote right after the comma |  \"x | a quoted cell must start "
+                + "right after the comma (RFC 4180): remove the space before the quote; the row is skipped"), p.errors);
+    }
+
+    @Test
+    void spacesAroundPlainCellsAreStripped() {
+        Recorded p = new Recorded();
+        assertEquals(List.of("2:1/2@2"), lines("a , b\n 1 , 2 \n", List.of("a", "b"), List.of(), p));
     }
 }

@@ -18,6 +18,15 @@ public final class Fixture {
         this.lines = lines;
     }
 
+    /** The directory of a dataset under src/test/resources/datasets (read in place: the gate never writes). */
+    public static Path dataset(String name) {
+        try {
+            return Path.of(Fixture.class.getClassLoader().getResource("datasets/" + name).toURI());
+        } catch (java.net.URISyntaxException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
     /** Reads a resource, e.g. {@code reference/tau.csv}. */
     public static Fixture of(String resource) {
         try (InputStream in = Fixture.class.getClassLoader().getResourceAsStream(resource)) {

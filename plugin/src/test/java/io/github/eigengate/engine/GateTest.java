@@ -55,7 +55,7 @@ class GateTest {
 
     @Test
     void everyMalformedCellOfARunIsReported() {
-        String c = "form,n,value\n" + rows("f11", A11, 1, 3) + "f11,4,two\nf11,x,1\nf99,1,1\nf23,1,1\nf23,2,-x^\n"
+        String c = "form,n,value\n" + rows("f11", A11, 1, 3) + "f11,4,two\nf11,x,1\nf99,1,1\nf99,2,1\nf23,1,1\nf23,2,-x^\n"
                 + "f23,3,\"[1,2,3]\"\nf23,4,\"[-1,1]\"\nf23,5,[0,1]\n";
         String forms = FORMS + "f1,0,2,,\nf2,3,-4,,\nf3,3,2,chi,\nf4,3,2,,x^2-1\nf5,3,2,,2*x+1\nf6,3,2,,x^2+1/2\n"
                 + "f11,11,2,,\n";
@@ -82,13 +82,13 @@ class GateTest {
                         + "found x; 'n' must be a decimal integer",
                 "data/coefficients.csv:7:1: error [table-format] form=f99: expected a form id from forms.csv, found "
                         + "f99; no form with this id is declared; its rows are skipped",
-                "data/coefficients.csv:9:3: error [table-format] form=f23 n=2: expected a polynomial in x with "
+                "data/coefficients.csv:10:3: error [table-format] form=f23 n=2: expected a polynomial in x with "
                         + "rational coefficients or a vector [c0, ..., c1], found -x^; the expression cannot be read "
                         + "at character 4: expected a nonnegative integer exponent",
-                "data/coefficients.csv:10:3: error [table-format] form=f23 n=3: expected a polynomial in x with "
+                "data/coefficients.csv:11:3: error [table-format] form=f23 n=3: expected a polynomial in x with "
                         + "rational coefficients or a vector [c0, ..., c1], found [1,2,3]; the vector has 3 entries "
                         + "but the field has degree 2",
-                "data/coefficients.csv:12:3: error [table-format] form=f23 n=5: expected a polynomial in x with "
+                "data/coefficients.csv:13:3: error [table-format] form=f23 n=5: expected a polynomial in x with "
                         + "rational coefficients or a vector [c0, ..., c1], found [0; the vector was split at its "
                         + "commas: quote the cell, e.g. \"[1, 2]\"");
         List<String> errors = Datasets.errors(r);

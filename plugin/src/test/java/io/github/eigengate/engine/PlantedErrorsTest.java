@@ -23,7 +23,7 @@ class PlantedErrorsTest {
     Path dir;
 
     private List<String> plant(int n, String value) throws IOException {
-        Path src = RealDatasetsTest.dataset("bigfields");
+        Path src = Fixture.dataset("bigfields");
         Fixture f = Fixture.of("datasets/bigfields/coefficients.csv");
         f.plant(FORM, n, value);
         Datasets.write(dir, "forms.csv", Files.readString(src.resolve("forms.csv")), "coefficients.csv", f.text());
@@ -58,7 +58,7 @@ class PlantedErrorsTest {
     @Test
     void primeDividingTheLevel() throws IOException {
         // S_2^new(Γ0(37)), datasets/weight2 (PARI/GP): 37 ‖ 37 forces a_37 = ±1; 3^2 | 63 forces a_3 = 0
-        Path src = RealDatasetsTest.dataset("weight2");
+        Path src = Fixture.dataset("weight2");
         Fixture f = Fixture.of("datasets/weight2/coefficients.csv");
         f.plant("lev37_wt2_o1", 37, "2").plant("lev63_wt2_o1", 3, "1");
         Datasets.write(dir, "forms.csv", Files.readString(src.resolve("forms.csv")), "coefficients.csv", f.text());
@@ -89,7 +89,7 @@ class PlantedErrorsTest {
 
     private static String formsField() {
         try {
-            for (String l : Files.readAllLines(RealDatasetsTest.dataset("bigfields").resolve("forms.csv"))) {
+            for (String l : Files.readAllLines(Fixture.dataset("bigfields").resolve("forms.csv"))) {
                 if (l.startsWith(FORM + ",")) {
                     return l.substring(l.lastIndexOf(',') + 1);
                 }

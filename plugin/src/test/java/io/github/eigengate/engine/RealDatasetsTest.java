@@ -3,8 +3,6 @@ package io.github.eigengate.engine;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.net.URISyntaxException;
-import java.nio.file.Path;
 import java.util.List;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
@@ -15,18 +13,10 @@ import org.junit.jupiter.params.provider.ValueSource;
  */
 class RealDatasetsTest {
 
-    static Path dataset(String name) {
-        try {
-            return Path.of(RealDatasetsTest.class.getClassLoader().getResource("datasets/" + name).toURI());
-        } catch (URISyntaxException e) {
-            throw new IllegalStateException(e);
-        }
-    }
-
     @ParameterizedTest
     @ValueSource(strings = {"level1", "weight2", "higherlevel", "bigfields"})
     void realDataPassEveryCheck(String name) {
-        Report r = new Gate(Settings.defaults()).run(List.of(new Gate.Dataset(dataset(name), name)));
+        Report r = new Gate(Settings.defaults()).run(List.of(new Gate.Dataset(Fixture.dataset(name), name)));
         assertEquals(List.of(), Datasets.errors(r));
         assertTrue(r.forms() > 0);
     }

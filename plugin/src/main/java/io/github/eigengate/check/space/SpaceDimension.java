@@ -1,0 +1,80 @@
+package io.github.eigengate.check.space;
+
+import io.github.eigengate.check.Check;
+import io.github.eigengate.check.FindingSink;
+import io.github.eigengate.check.Subject;
+import io.github.eigengate.data.Catalog;
+import io.github.eigengate.data.Form;
+import io.github.eigengate.data.FormData;
+import io.github.eigengate.data.SpaceRow;
+import io.github.eigengate.theory.spaces.Dimensions;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * A declared space lists every newform orbit: the field degrees of its forms add up to dim S_k^new(Γ0(N)), computed
+ * from the genus, elliptic points and cusps (Diamond–Shurman §3.9) and the σ0-inversion over the levels dividing N
+ * (G. Martin, J. Number Theory 112 (2005)). Every newform orbit of degree d contributes d eigenforms, and the
+ * newforms form a basis of the new subspace (Atkin–Lehner 1970).
+ */
+public final class SpaceDimension implements Check {
+
+    public static final String ID = "space-dimension";
+
+    @Override
+    public String id() {
+        return ID;
+    }
+
+    @Override
+    public String title() {
+        return "the field degrees of a declared space's forms add up to dim S_k^new(Γ0(N))";
+    }
+
+    @Override
+    public Pass start(Catalog catalog) {
+        return new Pass() {
+            @Override
+            public void form(FormData<?> form, FindingSink out) {
+                // needs only the catalog
+            }
+
+            @Override
+            public void finish(FindingSink out) {
+                for (SpaceRow row : catalog.spaces()) {
+                    check(catalog, row, out);
+                }
+            }
+        };
+    }
+
+    private static void check(Catalog catalog, SpaceRow row, FindingSink out) {
+        Subject subject = Spaces.subject(row.space());
+        out.examined(ID, subject);
+        int level = row.space().level();
+        int weight = row.space().weight();
+        if (weight < 2) {
+            out.warning(ID, row.location(), subject, "", "",
+                    "not checked: weight 1 is not supported (no dimension formula for weight 1 here)");
+            return;
+        }
+        long dim = Dimensions.newforms(level, weight);
+        List<Form> forms = Spaces.formsOf(catalog, row.space());
+        long sum = 0;
+        List<String> parts = new ArrayList<>();
+        for (Form f : forms) {
+            sum += f.degree();
+            parts.add(f.id() + ":" + f.degree());
+        }
+        if (sum != dim) {
+            String listing = parts.isEmpty() ? "no forms" : String.join(", ", parts);
+            out.error(ID, row.location(), subject, "dim S_k^new(Γ0(N)) = " + dim,
+                    "sum of field degrees = " + sum + " (" + listing + ")",
+                    sum < dim ? "the declared forms do not fill the new subspace: an orbit is missing (or a field is "
+                            + "too small)" : "the declared forms exceed the new subspace: an orbit is listed twice "
+                            + "or a form is not new of this level and weight");
+        } else if (dim == 0) {
+            out.note(ID, row.location(), subject, "the space is empty (dimension 0) and no forms are declared");
+        }
+    }
+}
