@@ -377,6 +377,19 @@ class WeightChecksTest {
     }
 
     @Test
+    void primeCellsThatCannotBeReadAreNamed() {
+        List<String> lines = Scenario.weights("f23,11,x +,,,,,", "f23,7,x + 1/7,,,,,", "f23,5,2*x + 4,,,,,").lines(dir);
+        assertEquals(3, lines.size(), String.join("\n", lines));
+        assertTrue(lines.get(0).startsWith("data/modp-weights.csv:2:3: error [table-format] form=f23 p=11: expected one "
+                + "of x + 3; x + 7, found x +; "), lines.get(0));
+        assertTrue(lines.get(1).startsWith("data/modp-weights.csv:3:3: error [table-format] form=f23 p=7: expected one "
+                + "of x^2 + 6*x + 6, found x + 1/7; "), lines.get(1));
+        // x^2 - x - 1 ≡ (x + 2)^2 mod 5: the only prime above 5 is (5, x + 2); 2*x + 4 is not monic
+        assertEquals("data/modp-weights.csv:4:3: error [table-format] form=f23 p=5: expected one of x + 2, found "
+                + "2*x + 4; not a monic irreducible factor of x^2 - x - 1 modulo 5", lines.get(2));
+    }
+
+    @Test
     void theGateRegistersTheFourChecks() {
         assertTrue(io.github.eigengate.engine.Gate.knownIds().containsAll(WeightChecks.IDS));
         Report r = Datasets.run(Datasets.write(dir, "forms.csv", "id,level,weight\ne11,11,2\n", "coefficients.csv",
