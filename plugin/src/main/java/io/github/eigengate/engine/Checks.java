@@ -10,6 +10,8 @@ import io.github.eigengate.check.form.Normalisation;
 import io.github.eigengate.check.form.RamanujanBound;
 import io.github.eigengate.check.space.SpaceDimension;
 import io.github.eigengate.check.space.SpaceTraces;
+import io.github.eigengate.check.weights.WeightChecks;
+import java.util.ArrayList;
 import java.util.List;
 
 /** The checks Eigengate runs, in report order. A new check is added here (see DEVELOPERS.md). */
@@ -19,7 +21,7 @@ public final class Checks {
     }
 
     public static List<Check> all(Settings settings) {
-        return List.of(
+        List<Check> checks = new ArrayList<>(List.of(
                 new Normalisation(),
                 new FieldSanity(),
                 new HeckeRelations(),
@@ -28,6 +30,9 @@ public final class Checks {
                 new SpaceDimension(),
                 new SpaceTraces(),
                 new CongruenceCheck(settings.uncertifiedIsWarning()),
-                new ReducibleCheck(settings.uncertifiedIsWarning()));
+                new ReducibleCheck(settings.uncertifiedIsWarning())));
+        // the weight checks share the reporting of their table's problems, so they need to know which are skipped
+        checks.addAll(WeightChecks.all(settings.skip()));
+        return List.copyOf(checks);
     }
 }
