@@ -15,7 +15,7 @@ SCRIPT = "congruences";
 BOUND = 1000;
 CHECK = 5000;
 \\ forms [N, k, i]
-WANT = [[1,12,1], [1,16,1], [1,22,1], [1,24,1], [11,2,1], [11,4,1], [11,8,1], [77,2,1], [26,2,2], [182,2,5], [46,2,1], [115,2,1], [51,2,1], [51,6,4], [57,2,2], [57,10,1], [32,2,1], [32,12,2]];
+WANT = [[1,12,1], [1,16,1], [1,22,1], [1,24,1], [11,2,1], [11,4,1], [11,8,1], [77,2,1], [26,2,2], [182,2,5], [46,2,1], [115,2,1], [51,2,1], [51,6,4], [57,2,2], [57,10,1], [32,2,1], [32,12,2], [21,2,1], [21,4,2], [27,2,1], [27,6,1]];
 \\ [form, other, p, twist, prime, other_prime, comment]; a_l(form) = l^twist a_l(other) mod the primes
 CONG = [\
  ["lev77_wt2_o1", "lev11_wt2_o1", 3, 0, 0, 0, "(c) weight 2, levels 77 and 11 (level raising at 7: a_7(lev11_wt2_o1) = -2 = -(7+1) mod 3)"],\
@@ -24,6 +24,8 @@ CONG = [\
  ["lev51_wt6_o4", "lev51_wt2_o1", 7, 5, x, 0, "(d) weights 6 = p-1 and 2, level 51, twist p-2 (companion forms, Gross, Duke Math. J. 61 (1990))"],\
  ["lev57_wt10_o1", "lev57_wt2_o2", 11, 9, x + 1, 0, "(d) weights 10 = p-1 and 2, level 57, twist p-2 (companion forms)"],\
  ["lev32_wt12_o2", "lev32_wt2_o1", 13, 11, x + 6, 0, "(d) weights 12 = p-1 and 2, level 32, twist p-2 (companion forms)"],\
+ ["lev21_wt4_o2", "lev21_wt2_o1", 5, 3, 0, 0, "(d) weights 4 = p-1 and 2, level 21, twist p-2, both rational (companion forms)"],\
+ ["lev27_wt6_o1", "lev27_wt2_o1", 7, 5, 0, 0, "(d) weights 6 = p-1 and 2, level 27, twist p-2, both rational; lev27_wt2_o1 has CM by Q(sqrt -3), 7 splits there"],\
  ["lev11_wt8_o1", "lev11_wt2_o1", 7, 0, x + 6, 0, "(d) weights 8 = p+1 and 2, level 11, no twist"],\
  ["lev11_wt4_o1", "lev11_wt2_o1", 3, 0, x, 0, "(d) weights 4 = p+1 and 2, level 11, no twist; (3, x) is ramified in Q(sqrt 3)"],\
  ["lev1_wt22_o1", "lev1_wt12_o1", 11, 0, 0, 0, "(e) level 1, weights 22 and 12"],\
@@ -39,6 +41,8 @@ CONGF = [\
  ["lev51_wt6_o4", "lev51_wt2_o1", 7, 0, x, 0, "twist 0 instead of p-2"],\
  ["lev57_wt10_o1", "lev57_wt2_o2", 11, 1, x + 1, 0, "twist 1 instead of p-2"],\
  ["lev32_wt12_o2", "lev32_wt2_o1", 13, 0, x + 6, 0, "twist 0 instead of p-2"],\
+ ["lev21_wt4_o2", "lev21_wt2_o1", 5, 1, 0, 0, "twist 1 instead of p-2"],\
+ ["lev27_wt6_o1", "lev27_wt2_o1", 7, 4, 0, 0, "twist 4 instead of p-2"],\
  ["lev11_wt8_o1", "lev11_wt2_o1", 7, 0, x + 1, 0, "the other prime above 7"],\
  ["lev11_wt4_o1", "lev11_wt2_o1", 3, 1, x, 0, "wrong twist"],\
  ["lev1_wt22_o1", "lev1_wt12_o1", 13, 0, 0, 0, "wrong p"],\
@@ -66,6 +70,8 @@ REDF = [\
   system(Str("mkdir -p ", DIR));
   short = vector(#forms, t, fx_trunc(forms[t], BOUND));
   for (t = 1, #short, fx_check_hecke(short[t]));
+  \\ CM check behind a comment below: a_l(lev27_wt2_o1) = 0 for every prime l = 2 mod 3
+  forprime (l = 2, CHECK, if (l % 3 == 2 && fx_find(forms, "lev27_wt2_o1")[5][l] != 0, fx_err("CM of lev27_wt2_o1")));
   for (t = 1, #CONG, my(c = CONG[t], a = fx_find(forms, c[1]), b = fx_find(forms, c[2]), w);
     fx_check_prime(a, c[3], c[5]); fx_check_prime(b, c[3], c[6]);
     if (fx_cong_first_failure(a, b, c[3], c[4], c[5], c[6], CHECK) != 0, fx_err(Str("congruence ", t)));
