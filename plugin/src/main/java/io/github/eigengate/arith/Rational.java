@@ -27,13 +27,20 @@ public final class Rational implements Comparable<Rational> {
 
     /** @return the integer {@code n} as a rational */
     public static Rational of(long n) {
-        if (n == 0) {
-            return ZERO;
-        }
-        if (n == 1) {
-            return ONE;
+        if (n >= -CACHED && n <= CACHED) {
+            return SMALL[(int) n + CACHED];
         }
         return new Rational(BigInteger.valueOf(n), BigInteger.ONE);
+    }
+
+    /** Small integers recur in every table (Hecke eigenvalues are small): shared instances, no allocation. */
+    private static final int CACHED = 1024;
+    private static final Rational[] SMALL = new Rational[2 * CACHED + 1];
+
+    static {
+        for (int i = -CACHED; i <= CACHED; i++) {
+            SMALL[i + CACHED] = i == 0 ? ZERO : i == 1 ? ONE : new Rational(BigInteger.valueOf(i), BigInteger.ONE);
+        }
     }
 
     /** @return the integer {@code n} as a rational */

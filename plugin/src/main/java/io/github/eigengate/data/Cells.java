@@ -60,6 +60,32 @@ final class Cells {
         return v >= 1 ? v : -1;
     }
 
+    /**
+     * The value of an optionally signed decimal of at most 18 digits with no whitespace, else {@link Long#MIN_VALUE}
+     * (the caller then takes the general path): the common cell of a rational table, read without allocation.
+     */
+    static long smallInteger(String s) {
+        int len = s.length();
+        int i = 0;
+        boolean negative = false;
+        if (len > 0 && (s.charAt(0) == '-' || s.charAt(0) == '+')) {
+            negative = s.charAt(0) == '-';
+            i = 1;
+        }
+        if (i == len || len - i > 18) {
+            return Long.MIN_VALUE;
+        }
+        long v = 0;
+        for (; i < len; i++) {
+            char c = s.charAt(i);
+            if (c < '0' || c > '9') {
+                return Long.MIN_VALUE;
+            }
+            v = v * 10 + (c - '0');
+        }
+        return negative ? -v : v;
+    }
+
     static String range(long min, long max) {
         return max >= Integer.MAX_VALUE ? "[" + min + ", " + Integer.MAX_VALUE + "]" : "[" + min + ", " + max + "]";
     }

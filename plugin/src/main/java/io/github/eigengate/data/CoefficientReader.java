@@ -208,6 +208,10 @@ public final class CoefficientReader {
     }
 
     private static Object rational(String text, Form form) {
+        long small = Cells.smallInteger(text);
+        if (small != Long.MIN_VALUE) {
+            return Rational.of(small);
+        }
         String s = Cells.compact(text);
         if (!Cells.isInteger(s)) {
             return "the form has rational coefficients (no field), so a_n must be an integer";

@@ -4,7 +4,6 @@ import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.charset.CharacterCodingException;
-import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -15,7 +14,6 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.function.Consumer;
-import java.io.InputStreamReader;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
@@ -68,11 +66,8 @@ public final class CsvTable {
      * or lacks a required column; rows read before a mid-file syntax error have been delivered.
      */
     public boolean read(Problems problems, Consumer<Row> each) {
-        var decoder = StandardCharsets.UTF_8.newDecoder()
-                .onMalformedInput(CodingErrorAction.REPORT)
-                .onUnmappableCharacter(CodingErrorAction.REPORT);
-        try (BufferedReader in = new BufferedReader(new InputStreamReader(Files.newInputStream(path), decoder),
-                1 << 16);
+        // Files.newBufferedReader decodes strictly: malformed UTF-8 raises CharacterCodingException
+        try (BufferedReader in = Files.newBufferedReader(path, StandardCharsets.UTF_8);
              CSVParser parser = CSVParser.builder().setReader(in).setFormat(FORMAT).get()) {
             List<String> header = parser.getHeaderNames().stream().map(String::strip).toList();
             int headerLine = (int) Math.max(1, parser.getCurrentLineNumber());

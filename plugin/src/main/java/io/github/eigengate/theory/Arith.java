@@ -23,6 +23,26 @@ public final class Arith {
         return spf;
     }
 
+    private static final int SHARED_LIMIT = 1 << 24;
+    private static volatile int[] shared = smallestPrimeFactors(1 << 12);
+
+    /**
+     * A table of smallest prime factors covering at least 0..max, shared between callers (every form of a table
+     * asks for the same one). The array must not be modified.
+     */
+    public static int[] sharedSmallestPrimeFactors(int max) {
+        int[] s = shared;
+        if (s.length > max) {
+            return s;
+        }
+        if (max >= SHARED_LIMIT) {
+            return smallestPrimeFactors(max);
+        }
+        s = smallestPrimeFactors(Math.min(SHARED_LIMIT - 1, Math.max(max, 2 * s.length)));
+        shared = s;
+        return s;
+    }
+
     /** Deterministic primality test for every long n. */
     public static boolean isPrime(long n) {
         if (n < 2) {

@@ -37,7 +37,7 @@ public final class HeckeRelations implements FormCheck {
         if (max < 4) {
             return;
         }
-        int[] spf = Arith.smallestPrimeFactors(max);
+        int[] spf = Arith.sharedSmallestPrimeFactors(max);
         Field<E> field = data.field();
         int level = data.form().level();
         for (int n : a.indices()) {

@@ -41,8 +41,9 @@ public final class RamanujanBound implements FormCheck {
         Coefficients<E> a = data.coefficients();
         int level = data.form().level();
         int k = data.form().weight();
+        int[] spf = Arith.sharedSmallestPrimeFactors(a.maxIndex());
         for (int p : a.indices()) {
-            if (level % p == 0 || !Arith.isPrime(p)) {
+            if (p < 2 || spf[p] != p || level % p == 0) {
                 continue;
             }
             E ap = a.get(p);
