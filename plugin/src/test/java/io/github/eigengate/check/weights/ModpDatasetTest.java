@@ -22,7 +22,7 @@ import org.junit.jupiter.api.io.TempDir;
 /**
  * The dataset datasets/modp (fixtures-gp/modp.gp, PARI/GP 2.15.2): level-1 forms of weights 12 … 24, weight-2 forms,
  * and companion pairs with coefficient fields of degree 5, with facts.csv saying at every prime above 5 ≤ p ≤ 97
- * (weight ≤ p + 1, p ∤ N) whether a_p ≡ 0, and companions.csv listing three companion pairs found in gp.
+ * (weight ≤ p + 1, p ∤ N) whether a_p ≡ 0, and companions.csv listing five companion pairs found in gp.
  *
  * <p>The weights a row must declare, by the published recipes (from memory where marked in WeightChecksTest):
  * supersingular, k ≤ p: k(ρ̄) = k, W = {Sym^{k−2}, Sym^{p+1−k} ⊗ det^{k−2}}; supersingular, k = p + 1: k(ρ̄) = 2,
@@ -106,10 +106,10 @@ class ModpDatasetTest {
                 other.add(f.line());
             }
         }
-        assertEquals(388, rows);
+        assertEquals(478, rows);
         assertEquals(ordinary, noted);
         assertEquals(1, other.size(), String.join("\n", other));
-        assertEquals("data/modp-weights.csv:390:3: error [table-format] form=lev57_wt10_o1 p=43: expected a prime above "
+        assertEquals("data/modp-weights.csv:480:3: error [table-format] form=lev57_wt10_o1 p=43: expected a prime above "
                 + "43 named by a factor of x^5 + 15*x^4 - 1560*x^3 - 21336*x^2 + 422496*x + 4243968 mod 43, found an "
                 + "empty cell; 43 divides the index of Z[x] in the ring of integers of Q[x]/(x^5 + 15*x^4 - 1560*x^3 "
                 + "- 21336*x^2 + 422496*x + 4243968) (Dedekind's criterion), so the primes above 43 cannot be named by "
@@ -118,7 +118,7 @@ class ModpDatasetTest {
 
     @Test
     void companionPairsAreSplitOnBothSides() {
-        // companions.csv: (form of weight p − 1, weight-2 form, p, twist p − 2, prime of the first) for p = 7, 11, 13
+        // companions.csv: (form of weight p − 1, weight-2 form, p, twist p − 2, prime of the first): five pairs, p = 5 to 13
         String congruences = Fixture.of("datasets/modp/companions.csv").text();
         StringBuilder table = new StringBuilder("form,p,prime,serre_weight,weights\n");
         for (String line : congruences.split("\n")) {
@@ -134,8 +134,8 @@ class ModpDatasetTest {
         assertEquals(List.of(), Datasets.lines(run("with", table.toString(), congruences)));
         // without the congruences both sides fall back to non-split: the companion weights are extra
         List<String> lines = Datasets.lines(run("without", table.toString(), null));
-        assertEquals(12, lines.size(), String.join("\n", lines));
-        assertEquals(6, lines.stream().filter(l -> l.contains("error [weight-set]")).count());
+        assertEquals(20, lines.size(), String.join("\n", lines));
+        assertEquals(10, lines.stream().filter(l -> l.contains("error [weight-set]")).count());
         assertEquals("data/modp-weights.csv:3:5: error [weight-set] form=lev51_wt2_o1 p=7: expected (0,0);(6,0), found "
                 + "(0,0);(4,1);(6,0); extra (4,1); W(ρ̄) for ρ̄|I_7 ≅ (ω^1 * ; 0 ω^0) non-split, peu ramifié [a_7 ≡ "
                 + "3 mod 7: ordinary (Deligne), non-split assumed] (Buzzard–Diamond–Jarvis 2010, §3)",
