@@ -102,8 +102,8 @@ public final class Gate {
             for (Check.Pass p : passes) {
                 p.finish(local);
             }
-            local.kept().forEach(outer::report);
             local.examined().forEach((check, units) -> units.forEach(u -> outer.examined(check, u)));
+            local.kept().forEach(outer::report);
             local.certificates().forEach(outer::certificate);
             return rows[0];
         }
