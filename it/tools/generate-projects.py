@@ -95,7 +95,7 @@ project('bad-level-range', 'Level 0 is out of range.',
         ["[ERROR] data/forms.csv:3:2: error [table-format] form=lev11_wt2_o1: expected an integer in [1, 2147483647], found 0; 'level' is out of range"])
 project('bad-weight-range', 'Weight 0 is out of range.',
         {'data/forms.csv': FORMS.replace('lev23_wt2_o1,23,2,', 'lev23_wt2_o1,23,0,'), 'data/coefficients.csv': coeffs()},
-        ["[ERROR] data/forms.csv:4:3: error [table-format] form=lev23_wt2_o1: expected an integer in [1, 2147483647], found 0; 'weight' is out of range"])
+        ["[ERROR] data/forms.csv:4:3: error [table-format] form=lev23_wt2_o1: expected an integer in [1, 10000], found 0; 'weight' is out of range"])
 b = list(L11); b[5] = '1/2'
 project('bad-rational-value', 'A non-integer a_n for a form with rational coefficients.',
         {'data/forms.csv': FORMS, 'data/coefficients.csv': coeffs(l11=b)},

@@ -3,6 +3,7 @@ package io.github.eigengate.data;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 
 /**
  * Everything of one dataset but the coefficients: the forms, the declared spaces and the claims tables. Small;
@@ -11,13 +12,15 @@ import java.util.Map;
  * @param directory         the dataset directory
  * @param display           how reports name it (relative to the project when possible)
  * @param forms             by id, in file order
+ * @param rejectedForms     ids of rows of {@code forms.csv} that were reported and left out
  * @param spaces            rows of {@code spaces.csv}
  * @param coefficientFiles  {@code coefficients.csv} then the shards {@code coefficients-*.csv}, by name
  * @param congruences       rows of {@code congruences.csv}
  * @param reducible         rows of {@code reducible.csv}
  * @param weights           rows of {@code modp-weights.csv}
  */
-public record Catalog(Path directory, String display, Map<String, Form> forms, List<SpaceRow> spaces,
+public record Catalog(Path directory, String display, Map<String, Form> forms, Set<String> rejectedForms,
+                      List<SpaceRow> spaces,
                       List<Path> coefficientFiles, List<TableRow> congruences, List<TableRow> reducible,
                       List<TableRow> weights) {
 

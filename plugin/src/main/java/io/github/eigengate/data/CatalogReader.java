@@ -9,9 +9,11 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 import java.util.stream.Stream;
 
 /**
@@ -40,7 +42,8 @@ public final class CatalogReader {
                     "a file " + Tables.FORMS, "none", "every dataset needs " + Tables.FORMS);
             return null;
         }
-        Map<String, Form> forms = readForms(formsFile, name(display, Tables.FORMS), problems);
+        Set<String> rejected = new HashSet<>();
+        Map<String, Form> forms = readForms(formsFile, name(display, Tables.FORMS), problems, rejected);
         List<SpaceRow> spaces = readSpaces(directory, display, problems);
         List<Path> shards = coefficientFiles(directory, display, problems);
         List<TableRow> congruences = readRows(directory, display, Tables.CONGRUENCES, Tables.CONGRUENCES_REQUIRED,
@@ -49,14 +52,15 @@ public final class CatalogReader {
                 Tables.REDUCIBLE_OPTIONAL, problems);
         List<TableRow> weights = readRows(directory, display, Tables.WEIGHTS, Tables.WEIGHTS_REQUIRED,
                 Tables.WEIGHTS_OPTIONAL, problems);
-        return new Catalog(directory, display, forms, spaces, shards, congruences, reducible, weights);
+        return new Catalog(directory, display, forms, Set.copyOf(rejected), spaces, shards, congruences, reducible,
+                weights);
     }
 
     static String name(String display, String file) {
         return display.isEmpty() || display.equals(".") ? file : display + "/" + file;
     }
 
-    private static Map<String, Form> readForms(Path file, String display, Problems problems) {
+    private static Map<String, Form> readForms(Path file, String display, Problems problems, Set<String> rejected) {
         Map<String, Form> forms = new LinkedHashMap<>();
         Map<String, QPolyCache> fields = new HashMap<>();
         CsvTable.of(file, display, Tables.FORMS_REQUIRED, Tables.FORMS_OPTIONAL).read(problems, row -> {
@@ -72,7 +76,7 @@ public final class CatalogReader {
                 return;
             }
             Integer level = Cells.integer(row, "level", 1, Integer.MAX_VALUE, subject, problems);
-            Integer weight = Cells.integer(row, "weight", 1, Integer.MAX_VALUE, subject, problems);
+            Integer weight = Cells.weight(row, subject, problems);
             String character = row.get("character");
             boolean characterOk = character.isEmpty() || character.equals("1");
             if (!characterOk) {
@@ -93,6 +97,8 @@ public final class CatalogReader {
             }
             if (level != null && weight != null && characterOk && fieldOk) {
                 forms.put(id, new Form(id, level, weight, field, row.at()));
+            } else {
+                rejected.add(id);
             }
         });
         return forms;
@@ -139,7 +145,7 @@ public final class CatalogReader {
         CsvTable.of(file, shown, Tables.SPACES_REQUIRED, Tables.SPACES_OPTIONAL).read(problems, row -> {
             String subject = "space=line " + row.line();
             Integer level = Cells.integer(row, "level", 1, Integer.MAX_VALUE, subject, problems);
-            Integer weight = Cells.integer(row, "weight", 1, Integer.MAX_VALUE, subject, problems);
+            Integer weight = Cells.weight(row, subject, problems);
             String character = row.get("character");
             if (!character.isEmpty() && !character.equals("1")) {
                 problems.error(row.at("character"), subject, "empty or 1 (the trivial character)", character,

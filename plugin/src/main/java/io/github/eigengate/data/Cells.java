@@ -43,6 +43,43 @@ final class Cells {
         return v.intValueExact();
     }
 
+    /** The largest weight accepted: powers p^(k-1) stay of a size exact arithmetic handles in a build. */
+    static final int MAX_WEIGHT = 10_000;
+
+    /**
+     * The weight column: an even integer in [2, 10000]. With the trivial character (the only one supported) −I lies in
+     * Γ0(N) and acts on S_k as (−1)^k, so there are no forms of odd weight.
+     */
+    static Integer weight(CsvTable.Row row, String subject, Problems problems) {
+        Integer k = integer(row, "weight", 1, MAX_WEIGHT, subject, problems);
+        if (k != null && k % 2 != 0) {
+            problems.error(row.at("weight"), subject, "an even weight", Integer.toString(k),
+                    "with the trivial character there are no forms of odd weight (−I ∈ Γ0(N) acts as (−1)^k)");
+            return null;
+        }
+        return k;
+    }
+
+    /**
+     * Whether whitespace separates two digits, as in {@code 1 0}: a typo the rule "whitespace is ignored" would
+     * otherwise turn into 10.
+     */
+    static boolean splitsDigits(String s) {
+        for (int i = 1; i < s.length(); i++) {
+            if (Character.isWhitespace(s.charAt(i))) {
+                int j = i;
+                while (j < s.length() && Character.isWhitespace(s.charAt(j))) {
+                    j++;
+                }
+                if (j < s.length() && Character.isDigit(s.charAt(i - 1)) && Character.isDigit(s.charAt(j))) {
+                    return true;
+                }
+                i = j;
+            }
+        }
+        return false;
+    }
+
     /** The value of a plain decimal of at most 9 digits that is ≥ 1, else -1 (the caller then reports). */
     static int smallPositive(String s) {
         int len = s.length();

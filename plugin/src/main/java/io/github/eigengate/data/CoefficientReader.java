@@ -102,7 +102,10 @@ public final class CoefficientReader {
     private void startRun(CsvTable.Row row, String id) {
         Form form = catalog.form(id);
         if (form == null) {
-            if (!id.equals(unknownRun)) {
+            if (!id.equals(unknownRun) && catalog.rejectedForms().contains(id)) {
+                problems.error(row.at("form"), "form=" + id, "a form id from forms.csv", id,
+                        "the form's row in forms.csv has an error (reported there); its rows are skipped");
+            } else if (!id.equals(unknownRun)) {
                 problems.error(row.at("form"), "form=" + (id.isEmpty() ? "?" : id), "a form id from forms.csv",
                         id.isEmpty() ? "an empty cell" : id,
                         "no form with this id is declared; its rows are skipped");
@@ -163,6 +166,11 @@ public final class CoefficientReader {
             String subject = "form=" + form.id() + " n=" + n;
             if (text.isEmpty()) {
                 problems.error(row.at("value"), subject, expectation(form), "an empty cell", "a_" + n + " is missing");
+                return;
+            }
+            if (Cells.splitsDigits(text)) {
+                problems.error(row.at("value"), subject, expectation(form), text,
+                        "whitespace separates two digits; write the number without it");
                 return;
             }
             if (text.startsWith("[") && !text.endsWith("]") && row.size() > row.width()) {

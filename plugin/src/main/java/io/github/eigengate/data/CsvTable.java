@@ -69,7 +69,7 @@ public final class CsvTable {
         // Files.newBufferedReader decodes strictly: malformed UTF-8 raises CharacterCodingException
         try (BufferedReader in = Files.newBufferedReader(path, StandardCharsets.UTF_8);
              CSVParser parser = CSVParser.builder().setReader(in).setFormat(FORMAT).get()) {
-            List<String> header = parser.getHeaderNames().stream().map(String::strip).toList();
+            List<String> header = parser.getHeaderNames().stream().map(CsvTable::headerName).toList();
             int headerLine = (int) Math.max(1, parser.getCurrentLineNumber());
             if (header.isEmpty()) {
                 problems.error(SourceLocation.file(display), "table=" + display, "a header row", "an empty file",
@@ -78,7 +78,14 @@ public final class CsvTable {
             }
             Map<String, Integer> index = new HashMap<>();
             for (int i = 0; i < header.size(); i++) {
-                index.put(header.get(i), i);
+                Integer before = index.putIfAbsent(header.get(i), i);
+                if (before != null) {
+                    problems.error(new SourceLocation(display, headerLine, i + 1), "table=" + display,
+                            "distinct column names", header.get(i), "the column '" + header.get(i)
+                                    + "' appears twice in the header (columns " + (before + 1) + " and " + (i + 1)
+                                    + ")");
+                    return false;
+                }
             }
             boolean complete = true;
             for (String column : required) {
@@ -151,6 +158,12 @@ public final class CsvTable {
     private static String causeText(Throwable e) {
         String m = e.getMessage();
         return m == null ? e.getClass().getSimpleName() : m;
+    }
+
+    /** A header name without surrounding spaces or a UTF-8 byte-order mark. */
+    private static String headerName(String raw) {
+        String s = raw.startsWith("\uFEFF") ? raw.substring(1) : raw;
+        return s.strip();
     }
 
     /** The position of a cell written {@code , "..."}, which RFC 4180 does not read as quoted, or -1. */

@@ -27,20 +27,35 @@ public final class Arith {
     private static volatile int[] shared = smallestPrimeFactors(1 << 12);
 
     /**
-     * A table of smallest prime factors covering at least 0..max, shared between callers (every form of a table
-     * asks for the same one). The array must not be modified.
+     * A table of smallest prime factors covering 0..min(max, 2^24 − 1), shared between callers (every form of a
+     * table asks for the same one). The array must not be modified; look larger n up with
+     * {@link #smallestPrimeFactor(int, int[])}.
      */
     public static int[] sharedSmallestPrimeFactors(int max) {
         int[] s = shared;
-        if (s.length > max) {
+        int want = Math.min(max, SHARED_LIMIT - 1);
+        if (s.length > want) {
             return s;
         }
-        if (max >= SHARED_LIMIT) {
-            return smallestPrimeFactors(max);
-        }
-        s = smallestPrimeFactors(Math.min(SHARED_LIMIT - 1, Math.max(max, 2 * s.length)));
+        s = smallestPrimeFactors(Math.min(SHARED_LIMIT - 1, Math.max(want, 2 * s.length)));
         shared = s;
         return s;
+    }
+
+    /** The smallest prime factor of n ≥ 2, from the table when it covers n, else by trial division. */
+    public static int smallestPrimeFactor(int n, int[] table) {
+        if (n < table.length) {
+            return table[n];
+        }
+        if (n % 2 == 0) {
+            return 2;
+        }
+        for (int d = 3; (long) d * d <= n; d += 2) {
+            if (n % d == 0) {
+                return d;
+            }
+        }
+        return n;
     }
 
     /** Deterministic primality test for every long n. */

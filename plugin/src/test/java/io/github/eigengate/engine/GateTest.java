@@ -63,7 +63,7 @@ class GateTest {
         List<String> expected = List.of(
                 "data/forms.csv:4:2: error [table-format] form=f1: expected an integer in [1, 2147483647], found 0; "
                         + "'level' is out of range",
-                "data/forms.csv:5:3: error [table-format] form=f2: expected an integer in [1, 2147483647], found -4; "
+                "data/forms.csv:5:3: error [table-format] form=f2: expected an integer in [1, 10000], found -4; "
                         + "'weight' is out of range",
                 "data/forms.csv:6:4: error [table-format] form=f3: expected empty or 1 (the trivial character), "
                         + "found chi; nontrivial characters are not supported yet",
@@ -199,5 +199,35 @@ class GateTest {
         assertTrue(Datasets.lines(r).get(0).startsWith("data/spaces.csv:1:3: warning [table-format]"));
         assertEquals("data/spaces.csv:3: warning [table-format] space=N=11 k=2: expected each space once, found "
                 + "N=11 k=2; the space is already declared at line 2", Datasets.lines(r).get(1));
+    }
+
+    @Test
+    void edgeInputsAreReportedNotCrashed() {
+        // a byte-order mark, an odd weight, a weight too large, a rejected form's rows, digits split by a space,
+        // and an index near 2^31 (factored by trial division beyond the shared sieve)
+        String forms = "\uFEFFid,level,weight\nf11,11,2\nodd,11,3\nhuge,11,20000\n";
+        String c = "form,n,value\nf11,1,1\nf11,2,-2\nf11,3,- 1\nf11,5,1 0\nodd,1,1\nf11,2147483647,1\n"
+                + "f11,2147483646,3\n";
+        List<String> lines = Datasets.lines(Datasets.run(Datasets.write(dir, "forms.csv", forms,
+                "coefficients.csv", c)));
+        assertEquals(List.of(
+                "data/forms.csv:3:3: error [table-format] form=odd: expected an even weight, found 3; with the trivial "
+                        + "character there are no forms of odd weight (−I ∈ Γ0(N) acts as (−1)^k)",
+                "data/forms.csv:4:3: error [table-format] form=huge: expected an integer in [1, 10000], found 20000; "
+                        + "'weight' is out of range",
+                "data/coefficients.csv:5:3: error [table-format] form=f11 n=5: expected an integer, found 1 0; "
+                        + "whitespace separates two digits; write the number without it",
+                "data/coefficients.csv:6:1: error [table-format] form=odd: expected a form id from forms.csv, found "
+                        + "odd; the form's row in forms.csv has an error (reported there); its rows are skipped"),
+                lines);
+    }
+
+    @Test
+    void aColumnRepeatedUpToSpacesIsAnError() {
+        Report r = Datasets.run(Datasets.write(dir, "forms.csv", "id,level,weight, level\nf,11,2,5\n"));
+        assertEquals(List.of("data/forms.csv:1:4: error [table-format] table=data/forms.csv: expected distinct column "
+                + "names, found level; the column 'level' appears twice in the header (columns 2 and 4)"),
+                Datasets.lines(r));
+        assertEquals(0, r.forms());
     }
 }

@@ -41,10 +41,10 @@ public final class HeckeRelations implements FormCheck {
         Field<E> field = data.field();
         int level = data.form().level();
         for (int n : a.indices()) {
-            if (n < 4 || spf[n] == n) {
+            int p = n < 4 ? n : Arith.smallestPrimeFactor(n, spf);
+            if (p == n) {
                 continue;
             }
-            int p = spf[n];
             int pe = 1;
             int m = n;
             while (m % p == 0) {
@@ -90,7 +90,7 @@ public final class HeckeRelations implements FormCheck {
                                     int[] spf) {
         Coefficients<E> a = data.coefficients();
         int rest = n;
-        int q = spf[n];
+        int q = Arith.smallestPrimeFactor(n, spf);
         while (rest > 1) {
             int qf = 1;
             while (rest % q == 0) {
@@ -110,7 +110,7 @@ public final class HeckeRelations implements FormCheck {
                 return;
             }
             if (rest > 1) {
-                q = spf[rest];
+                q = Arith.smallestPrimeFactor(rest, spf);
             }
         }
     }

@@ -43,7 +43,7 @@ public final class RamanujanBound implements FormCheck {
         int k = data.form().weight();
         int[] spf = Arith.sharedSmallestPrimeFactors(a.maxIndex());
         for (int p : a.indices()) {
-            if (p < 2 || spf[p] != p || level % p == 0) {
+            if (p < 2 || Arith.smallestPrimeFactor(p, spf) != p || level % p == 0) {
                 continue;
             }
             E ap = a.get(p);

@@ -53,11 +53,6 @@ public final class SpaceDimension implements Check {
         out.examined(ID, subject);
         int level = row.space().level();
         int weight = row.space().weight();
-        if (weight < 2) {
-            out.warning(ID, row.location(), subject, "", "",
-                    "not checked: weight 1 is not supported (no dimension formula for weight 1 here)");
-            return;
-        }
         long dim = Dimensions.newforms(level, weight);
         List<Form> forms = Spaces.formsOf(catalog, row.space());
         long sum = 0;

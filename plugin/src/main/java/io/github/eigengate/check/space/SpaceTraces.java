@@ -55,7 +55,7 @@ public final class SpaceTraces implements Check {
             @Override
             public void form(FormData<?> data, FindingSink out) {
                 Form form = data.form();
-                if (!declared.containsKey(form.space()) || form.weight() < 2) {
+                if (!declared.containsKey(form.space())) {
                     return;
                 }
                 Sums s = sums.computeIfAbsent(form.space(), k -> new Sums());
@@ -74,11 +74,6 @@ public final class SpaceTraces implements Check {
                     out.examined(ID, subject);
                     int forms = Spaces.formsOf(catalog, row.space()).size();
                     Sums s = sums.get(row.space());
-                    if (row.space().weight() < 2) {
-                        out.warning(ID, row.location(), subject, "", "",
-                                "not checked: weight 1 is not supported by the trace formula used here");
-                        continue;
-                    }
                     if (forms == 0) {
                         continue; // space-dimension judges an empty listing
                     }
