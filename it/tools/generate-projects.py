@@ -48,7 +48,7 @@ def coeffs(l11=L11, l23=L23, extra=''):
 def project(name, desc, files, expect, fail=True, config='', extra_verify=''):
     d = os.path.join(root, name)
     os.makedirs(d, exist_ok=True)
-    open(os.path.join(d,'pom.xml'),'w').write(POM % dict(name=name, desc=desc, config=config))
+    open(os.path.join(d,'pom.xml'),'w').write(POM % dict(name=name, desc=desc.replace('&', '&amp;').replace('<', '&lt;').replace('>', '&gt;'), config=config))
     for fn, content in files.items():
         p = os.path.join(d, fn)
         os.makedirs(os.path.dirname(p), exist_ok=True)
@@ -167,3 +167,28 @@ project('datasets-by-property', 'eigengate.datasets takes comma-separated direct
          'test.properties': 'eigengate.datasets = tables-a,tables-b\n'},
         ['[ERROR] eigengate: 3 errors, 0 warnings, 0 notes in 2 datasets (4 forms, 48 coefficient rows',
          '[ERROR] tables-b/coefficients.csv:4: error [normalisation] form=lev11_wt2_o1 n=1: expected 1, found 2'])
+# a_n of the level-11 newform, n <= 20: OEIS A006571; PARI/GP 2.15.2: mfcoefs(mfeigenbasis(mfinit([11,2],0))[1], 20)
+L11_20 = L11 + [4, 4, -1, -4, -2, 4, 0, 2]
+# tau(n), n <= 12: OEIS A000594; PARI/GP 2.15.2: vector(12, n, ramanujantau(n))
+TAU = [1, -24, 252, -1472, 4830, -6048, -16744, 84480, -113643, -115920, 534612, -370944]
+FORMS2 = '# Delta and the newform of level 11\nid,level,weight\ndelta,1,12\nf11,11,2\n'
+def coeffs2():
+    s = ('# tau(n): OEIS A000594 (PARI/GP: ramanujantau(n)); level 11: OEIS A006571 (PARI/GP: mfcoefs(mfeigenbasis(mfinit([11,2],0))[1], 20))\n'
+         'form,n,value\n')
+    for i, v in enumerate(TAU): s += 'delta,%d,%d\n' % (i + 1, v)
+    for i, v in enumerate(L11_20): s += 'f11,%d,%d\n' % (i + 1, v)
+    return s
+project('congruence-certified-with-certificate',
+        'tau(l) = a_l(f11) mod 11 (a classical congruence, from memory; checked in PARI/GP) is certified from l <= 12 and a certificate is written.',
+        {'data/forms.csv': FORMS2, 'data/coefficients.csv': coeffs2(),
+         'data/congruences.csv': '# Delta = f11 mod 11: tau(l) = a_l(f11) mod 11 for l != 11\nform,other,p\ndelta,f11,11\n'},
+        ['[INFO] data/congruences.csv:3: note [congruence] congruence=delta~f11 p=11: certified: a_l(delta) = l^0*a_l(f11) mod a prime above 11 for every prime l not dividing 11, having checked every l <= B = 12'],
+        fail=False, extra_verify='''def cert = new File(basedir, "target/eigengate/certificates/congruence-delta-f11-p11.txt").getText("UTF-8")
+assert cert.contains("bound B = floor(W*index/12): 12") : cert
+assert cert.contains("sha256 ") && cert.contains("  coefficients.csv") : cert
+''')
+project('weight-set-missing-weight',
+        'A predicted weight set that drops a Serre weight fails, naming form, p and the missing weight (level 11 is supersingular at 19: a_19 = 0).',
+        {'data/forms.csv': FORMS2, 'data/coefficients.csv': coeffs2(),
+         'data/modp-weights.csv': 'form,p,serre_weight,weights\nf11,19,2,"(0,0)"\n'},
+        ['[ERROR] data/modp-weights.csv:2:4: error [weight-set] form=f11 p=19: expected (0,0);(18,0), found (0,0); missing (18,0);'])
