@@ -14,7 +14,7 @@ import java.util.Random;
  * <p>Elements are residues modulo {@code g} (polynomials of degree {@code < f}); two fields are equal
  * when they have the same modulus {@code g}.
  */
-public final class FiniteField implements Field<FiniteField.Element> {
+public final class FiniteField extends ElementField<FiniteField.Element> {
     private final FpPoly g;
     private final long p;
     private final int f;
@@ -284,13 +284,6 @@ public final class FiniteField implements Field<FiniteField.Element> {
         return result;
     }
 
-    private Element own(Element a) {
-        if (a.field != this && !a.field.equals(this)) {
-            throw new IllegalArgumentException("element of " + a.field.name() + " used as an element of " + name());
-        }
-        return a;
-    }
-
     @Override
     public Element zero() {
         return zero;
@@ -299,36 +292,6 @@ public final class FiniteField implements Field<FiniteField.Element> {
     @Override
     public Element one() {
         return one;
-    }
-
-    @Override
-    public Element add(Element a, Element b) {
-        return own(a).add(own(b));
-    }
-
-    @Override
-    public Element subtract(Element a, Element b) {
-        return own(a).subtract(own(b));
-    }
-
-    @Override
-    public Element multiply(Element a, Element b) {
-        return own(a).multiply(own(b));
-    }
-
-    @Override
-    public Element negate(Element a) {
-        return own(a).negate();
-    }
-
-    @Override
-    public Element inverse(Element a) {
-        return own(a).inverse();
-    }
-
-    @Override
-    public boolean isZero(Element a) {
-        return own(a).isZero();
     }
 
     @Override
@@ -358,7 +321,7 @@ public final class FiniteField implements Field<FiniteField.Element> {
     }
 
     /** An element of {@link FiniteField}: a residue class modulo {@code g}. Immutable. */
-    public static final class Element {
+    public static final class Element implements ElementField.Arithmetic<Element> {
         private final FiniteField field;
         private final FpPoly value;
 

@@ -20,7 +20,7 @@ import java.util.List;
  * table of {@code x^k mod f} for {@code d <= k <= 2d-2}; traces use the power sums of the roots of
  * {@code f}, precomputed by Newton's identities.
  */
-public final class NumberField implements Field<NumberField.Element> {
+public final class NumberField extends ElementField<NumberField.Element> {
     private final QPoly f;
     private final int d;
     /** {@code x^(d+k) mod f = (1/redDen) * sum_j red[k][j] x^j} for {@code 0 <= k <= d-2}. */
@@ -217,14 +217,6 @@ public final class NumberField implements Field<NumberField.Element> {
         return new Element(this, n, den);
     }
 
-    private Element own(Element a) {
-        if (a.field != this && !a.field.equals(this)) {
-            throw new IllegalArgumentException(
-                    "element of " + a.field.name() + " used as an element of " + name());
-        }
-        return a;
-    }
-
     @Override
     public Element zero() {
         return zero;
@@ -233,36 +225,6 @@ public final class NumberField implements Field<NumberField.Element> {
     @Override
     public Element one() {
         return one;
-    }
-
-    @Override
-    public Element add(Element a, Element b) {
-        return own(a).add(own(b));
-    }
-
-    @Override
-    public Element subtract(Element a, Element b) {
-        return own(a).subtract(own(b));
-    }
-
-    @Override
-    public Element multiply(Element a, Element b) {
-        return own(a).multiply(own(b));
-    }
-
-    @Override
-    public Element negate(Element a) {
-        return own(a).negate();
-    }
-
-    @Override
-    public Element inverse(Element a) {
-        return own(a).inverse();
-    }
-
-    @Override
-    public boolean isZero(Element a) {
-        return own(a).isZero();
     }
 
     @Override
@@ -295,7 +257,7 @@ public final class NumberField implements Field<NumberField.Element> {
      * An element of {@link NumberField}: immutable, equal when in the same field (same defining
      * polynomial) with the same coordinates.
      */
-    public static final class Element {
+    public static final class Element implements ElementField.Arithmetic<Element> {
         private final NumberField field;
         private final BigInteger[] num;
         private final BigInteger den;
