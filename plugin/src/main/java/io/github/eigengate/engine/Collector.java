@@ -47,6 +47,21 @@ final class Collector implements FindingSink, Problems {
         return new Subject(s.kind(), s.name(), "");
     }
 
+    /**
+     * Takes over everything another collector gathered: its findings (within this collector's cap), the counts of
+     * the ones it did not keep, its examined units and certificates.
+     */
+    void absorb(Collector other) {
+        other.examined.forEach((check, units) -> units.forEach(u -> examined(check, u)));
+        other.kept.forEach(this::report);
+        for (Severity s : Severity.values()) {
+            int notKept = other.counts.get(s) - (int) other.kept.stream().filter(f -> f.severity() == s).count();
+            counts.merge(s, notKept, Integer::sum);
+            dropped += notKept;
+        }
+        certificates.addAll(other.certificates);
+    }
+
     @Override
     public void examined(String check, Subject unit) {
         examined.computeIfAbsent(check, k -> new LinkedHashSet<>()).add(unitOf(unit));

@@ -71,7 +71,7 @@ public final class Gate {
     private long runChecks(Catalog catalog, Collector outer) {
         Set<String> holdBack = Set.of();
         while (true) {
-            Collector local = new Collector(Integer.MAX_VALUE);
+            Collector local = new Collector(settings.maxFindings());
             List<Check.Pass> passes = new ArrayList<>();
             for (Check c : checks) {
                 passes.add(c.start(catalog));
@@ -102,9 +102,7 @@ public final class Gate {
             for (Check.Pass p : passes) {
                 p.finish(local);
             }
-            local.examined().forEach((check, units) -> units.forEach(u -> outer.examined(check, u)));
-            local.kept().forEach(outer::report);
-            local.certificates().forEach(outer::certificate);
+            outer.absorb(local);
             return rows[0];
         }
     }
