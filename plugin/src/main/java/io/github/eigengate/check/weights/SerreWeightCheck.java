@@ -1,22 +1,18 @@
 package io.github.eigengate.check.weights;
 
-import io.github.eigengate.check.Check;
 import io.github.eigengate.check.FindingSink;
-import io.github.eigengate.data.Catalog;
 import io.github.eigengate.theory.serre.SerreWeights;
 
 /**
  * The declared {@code serre_weight} equals Serre's weight k(ρ̄) recomputed from ρ̄|I_p (Serre, Duke Math. J. 54
  * (1987), §2; normalised to 2 ≤ k(ρ̄) ≤ p² − 1, see {@link SerreWeights#serreK}).
  */
-public final class SerreWeightCheck implements Check {
+public final class SerreWeightCheck extends WeightCheck {
 
     public static final String ID = "serre-weight";
 
-    private final boolean owner;
-
     SerreWeightCheck(boolean owner) {
-        this.owner = owner;
+        super(owner);
     }
 
     @Override
@@ -30,25 +26,20 @@ public final class SerreWeightCheck implements Check {
     }
 
     @Override
-    public Pass start(Catalog catalog) {
-        return new WeightPass(catalog, owner) {
-            @Override
-            void check(Analysis.Result result, FindingSink out) {
-                for (Analysis.Resolved r : result.resolved()) {
-                    Integer declared = r.row().serreWeight();
-                    if (declared == null) {
-                        continue;
-                    }
-                    out.examined(ID, r.row().subject());
-                    int k = SerreWeights.serreK(r.shape());
-                    if (k != declared) {
-                        int p = r.row().p();
-                        out.error(ID, r.row().source().at("serre_weight"), r.row().subject(), Integer.toString(k),
-                                declared.toString(), "Serre's weight of ρ̄ with ρ̄|I_" + p + " ≅ "
-                                        + Shapes.describe(r.shape()) + " [" + r.how() + "] (Serre 1987, §2)");
-                    }
-                }
+    void check(Analysis.Result result, FindingSink out) {
+        for (Analysis.Resolved r : result.resolved()) {
+            Integer declared = r.row().serreWeight();
+            if (declared == null) {
+                continue;
             }
-        };
+            out.examined(ID, r.row().subject());
+            int k = SerreWeights.serreK(r.shape());
+            if (k != declared) {
+                int p = r.row().p();
+                out.error(ID, r.row().source().at("serre_weight"), r.row().subject(), Integer.toString(k),
+                        declared.toString(), "Serre's weight of ρ̄ with ρ̄|I_" + p + " ≅ "
+                                + Shapes.describe(r.shape()) + " [" + r.how() + "] (Serre 1987, §2)");
+            }
+        }
     }
 }

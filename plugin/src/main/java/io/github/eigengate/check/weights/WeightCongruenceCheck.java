@@ -1,8 +1,6 @@
 package io.github.eigengate.check.weights;
 
-import io.github.eigengate.check.Check;
 import io.github.eigengate.check.FindingSink;
-import io.github.eigengate.data.Catalog;
 import io.github.eigengate.data.Form;
 import io.github.eigengate.theory.serre.LocalShape;
 import io.github.eigengate.theory.serre.SerreWeights;
@@ -24,14 +22,12 @@ import java.util.Set;
  * </ul>
  * Congruences involving a form declared reducible mod p in {@code reducible.csv} are left out.
  */
-public final class WeightCongruenceCheck implements Check {
+public final class WeightCongruenceCheck extends WeightCheck {
 
     public static final String ID = "weight-congruence";
 
-    private final boolean owner;
-
     WeightCongruenceCheck(boolean owner) {
-        this.owner = owner;
+        super(owner);
     }
 
     @Override
@@ -45,15 +41,10 @@ public final class WeightCongruenceCheck implements Check {
     }
 
     @Override
-    public Pass start(Catalog catalog) {
-        return new WeightPass(catalog, owner) {
-            @Override
-            void check(Analysis.Result result, FindingSink out) {
-                for (WeightTable.Congruence c : result.table().congruences()) {
-                    congruence(c, result, out);
-                }
-            }
-        };
+    void check(Analysis.Result result, FindingSink out) {
+        for (WeightTable.Congruence c : result.table().congruences()) {
+            congruence(c, result, out);
+        }
     }
 
     private static void congruence(WeightTable.Congruence c, Analysis.Result result, FindingSink out) {

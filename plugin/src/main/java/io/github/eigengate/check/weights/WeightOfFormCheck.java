@@ -1,8 +1,6 @@
 package io.github.eigengate.check.weights;
 
-import io.github.eigengate.check.Check;
 import io.github.eigengate.check.FindingSink;
-import io.github.eigengate.data.Catalog;
 
 /**
  * A row about a form describes that form's ρ̄ at p: a declared {@code local} or {@code shape} agrees with a_p
@@ -11,14 +9,12 @@ import io.github.eigengate.data.Catalog;
  * Jordan–Hölder constituent of Sym^{k−2}, Ash–Stevens). Also notes each assumption made for an ordinary form whose
  * splitting at p the tables do not settle.
  */
-public final class WeightOfFormCheck implements Check {
+public final class WeightOfFormCheck extends WeightCheck {
 
     public static final String ID = "weight-of-form";
 
-    private final boolean owner;
-
     WeightOfFormCheck(boolean owner) {
-        this.owner = owner;
+        super(owner);
     }
 
     @Override
@@ -32,17 +28,12 @@ public final class WeightOfFormCheck implements Check {
     }
 
     @Override
-    public Pass start(Catalog catalog) {
-        return new WeightPass(catalog, owner) {
-            @Override
-            void check(Analysis.Result result, FindingSink out) {
-                for (Analysis.Resolved r : result.resolved()) {
-                    if (r.row().form() != null) {
-                        out.examined(ID, r.row().subject());
-                    }
-                }
-                result.formFindings().forEach(out::report);
+    void check(Analysis.Result result, FindingSink out) {
+        for (Analysis.Resolved r : result.resolved()) {
+            if (r.row().form() != null) {
+                out.examined(ID, r.row().subject());
             }
-        };
+        }
+        result.formFindings().forEach(out::report);
     }
 }

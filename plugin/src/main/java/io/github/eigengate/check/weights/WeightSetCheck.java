@@ -1,8 +1,6 @@
 package io.github.eigengate.check.weights;
 
-import io.github.eigengate.check.Check;
 import io.github.eigengate.check.FindingSink;
-import io.github.eigengate.data.Catalog;
 import io.github.eigengate.theory.serre.SerreWeights;
 import io.github.eigengate.theory.serre.Weight;
 import java.util.Set;
@@ -11,14 +9,12 @@ import java.util.Set;
  * The declared {@code weights} equal the set W(ρ̄) of Buzzard–Diamond–Jarvis recomputed from ρ̄|I_p (Duke Math. J.
  * 155 (2010), §3, for F = Q; see {@link SerreWeights#bdj}). A finding names the missing and the extra weights.
  */
-public final class WeightSetCheck implements Check {
+public final class WeightSetCheck extends WeightCheck {
 
     public static final String ID = "weight-set";
 
-    private final boolean owner;
-
     WeightSetCheck(boolean owner) {
-        this.owner = owner;
+        super(owner);
     }
 
     @Override
@@ -32,26 +28,21 @@ public final class WeightSetCheck implements Check {
     }
 
     @Override
-    public Pass start(Catalog catalog) {
-        return new WeightPass(catalog, owner) {
-            @Override
-            void check(Analysis.Result result, FindingSink out) {
-                for (Analysis.Resolved r : result.resolved()) {
-                    Set<Weight> declared = r.row().weights();
-                    if (declared == null) {
-                        continue;
-                    }
-                    out.examined(ID, r.row().subject());
-                    Set<Weight> w = SerreWeights.bdj(r.shape());
-                    if (!w.equals(declared)) {
-                        int p = r.row().p();
-                        out.error(ID, r.row().source().at("weights"), r.row().subject(), Weight.formatSet(w),
-                                Weight.formatSet(declared), Shapes.difference(w, declared) + "; W(ρ̄) for ρ̄|I_" + p
-                                        + " ≅ " + Shapes.describe(r.shape()) + " [" + r.how()
-                                        + "] (Buzzard–Diamond–Jarvis 2010, §3)");
-                    }
-                }
+    void check(Analysis.Result result, FindingSink out) {
+        for (Analysis.Resolved r : result.resolved()) {
+            Set<Weight> declared = r.row().weights();
+            if (declared == null) {
+                continue;
             }
-        };
+            out.examined(ID, r.row().subject());
+            Set<Weight> w = SerreWeights.bdj(r.shape());
+            if (!w.equals(declared)) {
+                int p = r.row().p();
+                out.error(ID, r.row().source().at("weights"), r.row().subject(), Weight.formatSet(w),
+                        Weight.formatSet(declared), Shapes.difference(w, declared) + "; W(ρ̄) for ρ̄|I_" + p
+                                + " ≅ " + Shapes.describe(r.shape()) + " [" + r.how()
+                                + "] (Buzzard–Diamond–Jarvis 2010, §3)");
+            }
+        }
     }
 }
