@@ -285,11 +285,37 @@ public final class QPoly {
      *     constants
      */
     public QPoly squarefreePart() {
-        if (degree() <= 0) {
+        if (degree() <= 0 || squarefreeModuloSomePrime()) {
             return this;
         }
         QPoly g = gcd(derivative());
         return g.degree() == 0 ? this : divRem(g)[0];
+    }
+
+    /** Large primes for the modular squarefreeness test. */
+    private static final long[] TEST_PRIMES = {2147483647L, 2147483629L, 2147483587L};
+
+    /**
+     * A sufficient test, cheap beside a gcd over Q: if f mod q is squarefree of the same degree for a prime q, then f
+     * is squarefree over Q (a square factor g² of f over Z reduces to ḡ² of the same degree, since q does not divide
+     * the leading coefficient). Returns false when no tested prime decides.
+     */
+    private boolean squarefreeModuloSomePrime() {
+        for (long q : TEST_PRIMES) {
+            FpPoly r;
+            try {
+                r = FpPoly.fromQPoly(this, q);
+            } catch (ArithmeticException e) {
+                continue; // q divides a denominator
+            }
+            if (r.degree() != degree()) {
+                continue;
+            }
+            if (r.gcd(r.derivative()).degree() == 0) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /**

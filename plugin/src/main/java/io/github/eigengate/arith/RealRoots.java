@@ -63,10 +63,10 @@ public final class RealRoots {
     /**
      * Decides whether every complex root {@code α} of {@code f} is real with {@code α^2 <= c}, i.e.
      * lies in {@code [-sqrt c, sqrt c]} — the shape of a Ramanujan–Petersson bound {@code |α| <= 2
-     * p^((k-1)/2)}, checked as {@code α^2 <= 4 p^(k-1)} without irrational interval ends. Uses the
-     * root-squaring (Graeffe) polynomial {@code F} with {@code F(x^2) = ± f(x) f(-x)}, whose roots are
-     * the {@code α^2}: the answer is yes iff all roots of {@code f} are real and all roots of {@code
-     * F} lie in {@code [0, c]}.
+     * p^((k-1)/2)}, checked as {@code α^2 <= 4 p^(k-1)}. One Sturm sequence of the squarefree part
+     * g of f, evaluated exactly at the irrational ends ±√c: with c = u/v, v^d g(±√(uv)/v) = E ± O√(uv)
+     * for integers E, O, whose sign is decided by comparing E² with uv·O². The answer is yes iff the
+     * number of distinct roots of g in [−√c, √c] is deg g.
      *
      * @throws IllegalArgumentException if {@code f} is constant (or zero)
      */
@@ -77,25 +77,66 @@ public final class RealRoots {
         if (c.signum() < 0) {
             return false;
         }
-        QPoly g = f.squarefreePart();
-        if (countDistinctRealRoots(g) != g.degree()) {
-            return false;
+        List<BigInteger[]> s = sturmSequence(f);
+        int distinct = s.get(0).length - 1;
+        BigInteger big = c.num().multiply(c.den()); // √c = √big / den
+        int rootAtLowerEnd = signAtSqrt(s.get(0), big, c.den(), -1) == 0 ? 1 : 0;
+        if (big.signum() == 0) {
+            return rootAtLowerEnd == distinct;
         }
-        QPoly fMinus = g.multiply(reflect(g));
-        Rational[] y = new Rational[g.degree() + 1];
-        for (int k = 0; k <= g.degree(); k++) {
-            y[k] = fMinus.coefficient(2 * k);
-        }
-        return allRootsRealIn(QPoly.of(y), Rational.ZERO, c);
+        int inside = variationsAtSqrt(s, big, c.den(), -1) - variationsAtSqrt(s, big, c.den(), 1) + rootAtLowerEnd;
+        return inside == distinct;
     }
 
-    /** @return {@code f(-x)} */
-    private static QPoly reflect(QPoly f) {
-        Rational[] r = new Rational[f.degree() + 1];
-        for (int k = 0; k <= f.degree(); k++) {
-            r[k] = k % 2 == 0 ? f.coefficient(k) : f.coefficient(k).negate();
+    /** Sign changes of the sequence at σ√big/den, σ = ±1. */
+    private static int variationsAtSqrt(List<BigInteger[]> s, BigInteger big, BigInteger den, int sigma) {
+        int count = 0;
+        int last = 0;
+        for (BigInteger[] p : s) {
+            int sg = signAtSqrt(p, big, den, sigma);
+            if (sg != 0) {
+                if (last != 0 && sg != last) {
+                    count++;
+                }
+                last = sg;
+            }
         }
-        return QPoly.of(r);
+        return count;
+    }
+
+    /** The sign of p(σ√big/den), from den^d p(σ√big/den) = E + σ·O·√big with integers E, O. */
+    static int signAtSqrt(BigInteger[] p, BigInteger big, BigInteger den, int sigma) {
+        int d = p.length - 1;
+        if (d < 0) {
+            return 0;
+        }
+        BigInteger e = BigInteger.ZERO;
+        BigInteger o = BigInteger.ZERO;
+        BigInteger bigPow = BigInteger.ONE; // big^(i/2), stepped every two i
+        BigInteger[] denPow = new BigInteger[d + 1];
+        denPow[0] = BigInteger.ONE;
+        for (int i = 1; i <= d; i++) {
+            denPow[i] = denPow[i - 1].multiply(den);
+        }
+        for (int i = 0; i <= d; i++) {
+            BigInteger term = p[i].multiply(bigPow).multiply(denPow[d - i]);
+            if (i % 2 == 0) {
+                e = e.add(term);
+            } else {
+                o = o.add(term);
+                bigPow = bigPow.multiply(big);
+            }
+        }
+        int se = e.signum();
+        int so = o.signum() * sigma;
+        if (so == 0 || big.signum() == 0) {
+            return se;
+        }
+        if (se == 0 || se == so) {
+            return so == 0 ? se : (se == 0 ? so : se);
+        }
+        int cmp = e.multiply(e).compareTo(big.multiply(o).multiply(o));
+        return cmp > 0 ? se : cmp < 0 ? so : 0;
     }
 
     /** The Sturm sequence of the squarefree part of {@code f}, as positive integer multiples. */

@@ -19,8 +19,8 @@ import java.math.BigInteger;
  * Deligne–Serre 1974 for k = 1).
  *
  * <p>Decided exactly: a_p is totally real (trivial character), so the bound holds in every embedding iff every root
- * α of the characteristic polynomial χ of a_p is real with α² ≤ 4p^{k−1}, iff every root of
- * h(y) = ∏(y − α²), with h(x²) = (−1)^d χ(x)χ(−x), lies in [0, 4p^{k−1}] — a Sturm count over the integers.
+ * α of the characteristic polynomial χ of a_p is real with α² ≤ 4p^{k−1}: a Sturm count of the distinct roots of χ
+ * in [−2p^{(k−1)/2}, 2p^{(k−1)/2}], the irrational ends handled exactly ({@link RealRoots#allRootsRealWithSquareAtMost}).
  */
 public final class RamanujanBound implements FormCheck {
 
@@ -69,25 +69,8 @@ public final class RamanujanBound implements FormCheck {
         }
     }
 
-    /** Whether every root α of χ is real with α² ≤ bound. */
+    /** Whether every root α of χ is real with α² ≤ bound (one Sturm sequence, evaluated exactly at ±√bound). */
     static boolean withinBound(QPoly chi, BigInteger bound) {
-        int d = chi.degree();
-        QPoly minus = QPoly.of(alternate(chi));
-        QPoly prod = chi.multiply(minus);
-        Rational[] h = new Rational[d + 1];
-        for (int i = 0; i <= d; i++) {
-            Rational c = prod.coefficient(2 * i);
-            h[i] = d % 2 == 0 ? c : c.negate();
-        }
-        return RealRoots.allRootsRealIn(QPoly.of(h), Rational.ZERO, Rational.of(bound));
-    }
-
-    /** Coefficients of χ(−x). */
-    private static Rational[] alternate(QPoly chi) {
-        Rational[] c = new Rational[chi.degree() + 1];
-        for (int i = 0; i <= chi.degree(); i++) {
-            c[i] = i % 2 == 0 ? chi.coefficient(i) : chi.coefficient(i).negate();
-        }
-        return c;
+        return RealRoots.allRootsRealWithSquareAtMost(chi, Rational.of(bound));
     }
 }
