@@ -22,6 +22,9 @@ import java.util.stream.Stream;
  */
 public final class CatalogReader {
 
+    /** Beyond this, exact factorisation and characteristic polynomials stop being affordable in a build. */
+    static final int MAX_FIELD_DEGREE = 1000;
+
     private CatalogReader() {
     }
 
@@ -119,6 +122,10 @@ public final class CatalogReader {
         }
         if (f.degree() < 1) {
             return new QPolyCache(null, expected, "a field polynomial must have degree at least 1");
+        }
+        if (f.degree() > MAX_FIELD_DEGREE) {
+            return new QPolyCache(null, expected, "coefficient fields of degree above " + MAX_FIELD_DEGREE
+                    + " are not supported (this one has degree " + f.degree() + ")");
         }
         if (!f.isMonic()) {
             return new QPolyCache(null, expected, "the field polynomial is not monic");

@@ -230,4 +230,12 @@ class GateTest {
                 Datasets.lines(r));
         assertEquals(0, r.forms());
     }
+
+    @Test
+    void aFieldOfHugeDegreeIsRefusedBeforeAnyFactorisation() {
+        Report r = Datasets.run(Datasets.write(dir, "forms.csv", "id,level,weight,field\nf,11,2,x^5000 - 2\n"));
+        assertEquals(List.of("data/forms.csv:2:4: error [table-format] form=f: expected a monic irreducible polynomial "
+                + "in x with integer coefficients, found x^5000 - 2; coefficient fields of degree above 1000 are not "
+                + "supported (this one has degree 5000)"), Datasets.lines(r));
+    }
 }
