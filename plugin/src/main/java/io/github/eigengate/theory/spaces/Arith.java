@@ -177,14 +177,17 @@ final class Arith {
         if (n < 0) {
             throw new IllegalArgumentException("negative: " + n);
         }
-        long r = (long) Math.sqrt((double) n);
-        // correct the floating-point estimate by exact integer comparisons
-        while (r > 0 && r > n / r) {
-            r--;
+        if (n < 2) {
+            return n;
         }
-        while (r + 1 <= n / (r + 1)) {
-            r++;
+        // integer Newton iteration from 2^⌈bits/2⌉ ≥ √n, decreasing to ⌊√n⌋ (no floating point)
+        long x = 1L << ((64 - Long.numberOfLeadingZeros(n) + 1) / 2);
+        while (true) {
+            long y = (x + n / x) >>> 1;
+            if (y >= x) {
+                return x;
+            }
+            x = y;
         }
-        return r;
     }
 }
