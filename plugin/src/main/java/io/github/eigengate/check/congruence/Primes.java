@@ -24,7 +24,7 @@ final class Primes {
 
     private void sieve(int n) {
         BitSet composite = new BitSet(n + 1);
-        int[] out = new int[Math.max(16, (int) (1.3 * n / Math.max(1, Math.log(n))) + 16)];
+        int[] out = new int[n / 10 + 16]; // a first guess at π(n); grown by doubling when short
         int size = 0;
         for (int i = 2; i <= n; i++) {
             if (!composite.get(i)) {
