@@ -279,21 +279,7 @@ public final class FpPoly implements Comparable<FpPoly> {
      * @throws IllegalArgumentException if {@code e < 0}
      */
     public FpPoly pow(int e) {
-        if (e < 0) {
-            throw new IllegalArgumentException("negative exponent " + e);
-        }
-        FpPoly result = one(p);
-        FpPoly base = this;
-        while (e > 0) {
-            if ((e & 1) != 0) {
-                result = result.multiply(base);
-            }
-            e >>= 1;
-            if (e > 0) {
-                base = base.multiply(base);
-            }
-        }
-        return result;
+        return Powers.power(this, e, one(p), FpPoly::multiply);
     }
 
     /** @return this divided by its leading coefficient (zero stays zero) */

@@ -483,18 +483,7 @@ public final class NumberField extends ElementField<NumberField.Element> {
         }
 
         private Element pow(long e) {
-            Element result = field.one;
-            Element base = this;
-            while (e > 0) {
-                if ((e & 1) != 0) {
-                    result = result.multiply(base);
-                }
-                e >>= 1;
-                if (e > 0) {
-                    base = base.multiply(base);
-                }
-            }
-            return result;
+            return Powers.power(this, e, field.one, Element::multiply);
         }
 
         /** @return the trace {@code Tr_{K/Q}}: the trace of multiplication by this element */

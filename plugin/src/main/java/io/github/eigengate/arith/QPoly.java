@@ -323,21 +323,7 @@ public final class QPoly {
      * @throws IllegalArgumentException if {@code e < 0}
      */
     public QPoly pow(int e) {
-        if (e < 0) {
-            throw new IllegalArgumentException("negative exponent " + e);
-        }
-        QPoly result = ONE;
-        QPoly base = this;
-        while (e > 0) {
-            if ((e & 1) != 0) {
-                result = result.multiply(base);
-            }
-            e >>= 1;
-            if (e > 0) {
-                base = base.multiply(base);
-            }
-        }
-        return result;
+        return Powers.power(this, e, ONE, QPoly::multiply);
     }
 
     @Override
