@@ -489,7 +489,6 @@ public final class NumberField extends ElementField<NumberField.Element> {
         /** @return the trace {@code Tr_{K/Q}}: the trace of multiplication by this element */
         public Rational trace() {
             BigInteger acc = BigInteger.ZERO;
-            BigInteger accDen = BigInteger.ONE;
             Rational sum = Rational.ZERO;
             for (int j = 0; j < num.length; j++) {
                 if (num[j].signum() == 0) {
