@@ -38,8 +38,9 @@ public final class LevelPrimes implements FormCheck {
         }
         Coefficients<E> a = data.coefficients();
         Field<E> field = data.field();
-        for (long p : Arith.primeFactors(level)) {
-            int e = Arith.valuation(level, p);
+        for (long[] pe : Arith.factor(level)) {
+            long p = pe[0];
+            long e = pe[1];
             E ap = a.get(p);
             if (ap == null) {
                 continue;

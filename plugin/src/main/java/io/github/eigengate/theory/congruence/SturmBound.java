@@ -1,5 +1,6 @@
 package io.github.eigengate.theory.congruence;
 
+import io.github.eigengate.theory.Arith;
 import java.math.BigInteger;
 import java.util.Map;
 import java.util.SortedMap;
@@ -62,14 +63,8 @@ public final class SturmBound {
             throw new IllegalArgumentException("level must be positive, was " + n);
         }
         SortedMap<Long, Integer> out = new TreeMap<>();
-        for (long q = 2; q * q <= n; q++) {
-            while (n % q == 0) {
-                out.merge(q, 1, Integer::sum);
-                n /= q;
-            }
-        }
-        if (n > 1) {
-            out.merge(n, 1, Integer::sum);
+        for (long[] qe : Arith.factor(n)) {
+            out.put(qe[0], (int) qe[1]);
         }
         return out;
     }

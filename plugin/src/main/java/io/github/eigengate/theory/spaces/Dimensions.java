@@ -1,5 +1,7 @@
 package io.github.eigengate.theory.spaces;
 
+import io.github.eigengate.theory.Arith;
+
 /**
  * Dimensions of spaces of cusp forms of integral weight k ≥ 2 for Γ0(N) with trivial character.
  *

@@ -1,5 +1,7 @@
 package io.github.eigengate.theory.spaces;
 
+import io.github.eigengate.theory.Arith;
+
 /**
  * A precomputed table of Hurwitz class numbers H(n), 0 ≤ n ≤ bound, stored as the integers 12·H(n).
  *

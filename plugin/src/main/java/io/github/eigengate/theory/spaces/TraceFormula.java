@@ -1,5 +1,6 @@
 package io.github.eigengate.theory.spaces;
 
+import io.github.eigengate.theory.Arith;
 import java.math.BigInteger;
 
 /**

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import io.github.eigengate.theory.Arith;
 import java.math.BigInteger;
 import java.util.HashMap;
 import java.util.List;
