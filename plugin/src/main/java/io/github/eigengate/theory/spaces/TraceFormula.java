@@ -339,8 +339,23 @@ public final class TraceFormula {
         return u1;
     }
 
+    /** The local factor a class-number sum is weighted by: μ(t, f, n), or its β-weighted sum over M | N. */
+    private interface Weight {
+        long at(long disc, long f);
+    }
+
     /** Σ_f 12h_w((t² − 4n)/f²) · μ(t, f, n) for the level lv. */
     private long classSum(Level lv, long t, long n) {
+        return weightedClassSum(lv, t, n, (disc, f) -> lv.mu(t, n, disc, f));
+    }
+
+    /** Σ_f 12h_w((t² − 4n)/f²) · Σ_{M | N} β(N/M) μ_M(t, f, n), for the level N of this instance. */
+    private long newClassSum(long t, long n) {
+        return weightedClassSum(level, t, n, (disc, f) -> level.betaWeightedMu(t, n, disc, f));
+    }
+
+    /** Σ_{f² | t² − 4n} 12h_w((t² − 4n)/f²) · weight(t² − 4n, f); only f sharing a prime with N need splitting. */
+    private long weightedClassSum(Level lv, long t, long n, Weight weight) {
         long m = 4 * n - t * t;
         if (lv.n == 1) {
             return table.times12(m);
@@ -351,37 +366,12 @@ public final class TraceFormula {
             return 0;
         }
         if (Arith.gcd(cond, lv.n) == 1) {
-            long mu = lv.mu(t, n, disc, 1);
+            long mu = weight.at(disc, 1);
             return mu == 0 ? 0 : mu * table.times12(m);
         }
         long sum = 0;
         for (long f : Arith.divisors(Arith.factor(cond))) {
-            long mu = lv.mu(t, n, disc, f);
-            if (mu != 0) {
-                sum += mu * table.primitiveTimes12(m / (f * f));
-            }
-        }
-        return sum;
-    }
-
-    /** Σ_f 12h_w((t² − 4n)/f²) · Σ_{M | N} β(N/M) μ_M(t, f, n), for the level N of this instance. */
-    private long newClassSum(long t, long n) {
-        long m = 4 * n - t * t;
-        if (level.n == 1) {
-            return table.times12(m);
-        }
-        long disc = -m;
-        long cond = table.conductor(m);
-        if (cond == 0) {
-            return 0;
-        }
-        if (Arith.gcd(cond, level.n) == 1) {
-            long mu = level.betaWeightedMu(t, n, disc, 1);
-            return mu == 0 ? 0 : mu * table.times12(m);
-        }
-        long sum = 0;
-        for (long f : Arith.divisors(Arith.factor(cond))) {
-            long mu = level.betaWeightedMu(t, n, disc, f);
+            long mu = weight.at(disc, f);
             if (mu != 0) {
                 sum += mu * table.primitiveTimes12(m / (f * f));
             }
