@@ -2,6 +2,7 @@ package io.github.eigengate.check.congruence;
 
 import io.github.eigengate.arith.ExpressionSyntaxException;
 import io.github.eigengate.arith.FpPoly;
+import io.github.eigengate.check.Certificate;
 import io.github.eigengate.check.Check;
 import io.github.eigengate.check.Finding;
 import io.github.eigengate.check.FindingSink;
@@ -13,6 +14,7 @@ import io.github.eigengate.data.FormData;
 import io.github.eigengate.data.Problems;
 import io.github.eigengate.data.TableRow;
 import io.github.eigengate.theory.Arith;
+import io.github.eigengate.theory.congruence.CongruenceBounds.Plan;
 import java.io.IOException;
 import java.io.InputStream;
 import java.math.BigInteger;
@@ -28,6 +30,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import java.util.function.Supplier;
 
 /**
  * What the congruence checks share: parsing of claim cells (malformed ones become {@code table-format} findings),
@@ -193,6 +196,86 @@ abstract class ClaimPass implements Check.Pass {
                             String found, String reason) {
         out.report(new Finding(check, uncertifiedIsWarning ? Severity.WARNING : Severity.ERROR, row.at(), subject,
                 expected, found, reason));
+    }
+
+    /**
+     * Reports that the primes above p cannot be named for one of the forms (p divides the index of Z[x]); returns
+     * whether it did.
+     */
+    final boolean reportIndexProblem(FindingSink out, String check, TableRow row, Subject subject, long p,
+                                     Form... forms) {
+        for (Form h : forms) {
+            String ip = indexProblem(h, p);
+            if (ip != null) {
+                out.error(check, row.at(), subject, "primes above " + p + " named by factors of "
+                        + h.fieldPolynomial() + " mod " + p, "an index divisible by " + p, "not supported: " + ip);
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /**
+     * Reports an a_l below the bound with p in a denominator (no residue exists, so the data cannot be those of a
+     * newform); returns whether it did.
+     */
+    final boolean reportNotIntegral(FindingSink out, String check, TableRow row, Subject subject, long p,
+                                    BigInteger smallestBound, Residues.Store... stores) {
+        for (Residues.Store s : stores) {
+            if (s.notIntegralAt > 0 && s.notIntegralAt <= asLong(smallestBound)) {
+                out.error(check, row.at(), subject, "a_" + s.notIntegralAt + "(" + s.form.id() + ") integral at " + p,
+                        s.notIntegralValue, "a_l of a newform is an algebraic integer, so it has a residue mod every "
+                                + "prime above p; this one has " + p + " in a denominator");
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /**
+     * The end of an evaluation whose residues agree up to the tables' end x: not certified when x is below the bound
+     * of {@code plan}, else a certified note and the certificate (made only then).
+     */
+    final void conclude(FindingSink out, String check, TableRow row, Subject subject, String claimText, Plan plan,
+                        long x, Set<Long> excluded, Supplier<Certificate> certificate) {
+        BigInteger b = plan.bound();
+        if (BigInteger.valueOf(x).compareTo(b) < 0) {
+            notCertified(out, check, row, subject, "a_l for every prime l <= B = " + b,
+                    "the tables stop at l = " + x,
+                    "not certified: the congruence holds for every l <= " + x + " in the tables, but Sturm's bound "
+                            + "needs l <= " + b + " (" + plan.derivation() + "; Sturm, LNM 1240, Thm 1)");
+            return;
+        }
+        out.note(check, row.at(), subject, "certified: " + claimText + " for every prime l not dividing "
+                + product(excluded) + ", having checked every l <= B = " + b + " (" + plan.derivation()
+                + "; Sturm, LNM 1240, Thm 1)");
+        out.certificate(certificate.get());
+    }
+
+    /** The certificate lines from the theorem on, the same for every kind of claim; {@code extra} follows the route. */
+    final String certificateTail(TableRow row, long p, Plan plan, long x, Set<Long> excluded, String extra) {
+        StringBuilder b = new StringBuilder();
+        b.append("theorem: J. Sturm, On the congruence of modular forms, LNM 1240 (1987), Theorem 1, applied to ")
+                .append(plan.derivation()).append('\n');
+        b.append("route: ").append(plan.route()).append('\n');
+        b.append(extra);
+        b.append("level M: ").append(plan.levelValue()).append(", index [SL2(Z):Gamma0(M)] = ")
+                .append(plan.index()).append('\n');
+        b.append("weight W: ").append(plan.weight()).append('\n');
+        b.append("bound B = floor(W*index/12): ").append(plan.bound()).append('\n');
+        b.append("checked: a_l for every prime l <= ").append(plan.bound()).append(" not dividing ")
+                .append(product(excluded)).append(plan.comparesAtP() ? ", and a_" + p : "").append('\n');
+        b.append("tables: every needed a_l present up to at least l = ").append(x).append('\n');
+        b.append("claim row: ").append(row.at()).append('\n');
+        b.append("dataset: ").append(catalog.display()).append('\n');
+        b.append(checksums());
+        return b.toString();
+    }
+
+    /** A form as certificates describe it. */
+    static String describe(Form f) {
+        return f.id() + " (level " + f.level() + ", weight " + f.weight() + ", field "
+                + (f.rational() ? "Q" : "Q[x]/(" + f.fieldPolynomial() + ")") + ")";
     }
 
     /** A file name made of the parts, safe on every file system, and unique within this pass. */

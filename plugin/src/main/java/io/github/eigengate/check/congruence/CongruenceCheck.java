@@ -11,7 +11,6 @@ import io.github.eigengate.data.Form;
 import io.github.eigengate.data.TableRow;
 import io.github.eigengate.theory.congruence.CongruenceBounds;
 import io.github.eigengate.theory.congruence.CongruenceBounds.Plan;
-import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
@@ -128,23 +127,13 @@ public final class CongruenceCheck implements Check {
                                 + ", so traces differ at a positive density of primes (Chebotarev, Brauer–Nesbitt)");
                 return;
             }
-            for (Form h : new Form[] {f, g}) {
-                String ip = indexProblem(h, p);
-                if (ip != null) {
-                    out.error(ID, c.row.at(), c.subject, "primes above " + p + " named by factors of "
-                            + h.fieldPolynomial() + " mod " + p, "an index divisible by " + p, "not supported: " + ip);
-                    return;
-                }
+            if (reportIndexProblem(out, ID, c.row, c.subject, p, f, g)) {
+                return;
             }
             Residues.Store sf = store(f, p);
             Residues.Store sg = store(g, p);
-            for (Residues.Store s : new Residues.Store[] {sf, sg}) {
-                if (s.notIntegralAt > 0 && s.notIntegralAt <= asLong(c.plans.get(0).bound())) {
-                    out.error(ID, c.row.at(), c.subject, "a_" + s.notIntegralAt + "(" + s.form.id() + ") integral at "
-                            + p, s.notIntegralValue, "a_l of a newform is an algebraic integer, so it has a residue "
-                            + "mod every prime above p; this one has " + p + " in a denominator");
-                    return;
-                }
+            if (reportNotIntegral(out, ID, c.row, c.subject, p, c.plans.get(0).bound(), sf, sg)) {
+                return;
             }
             Set<Long> excluded = primesDividing(p, f.level(), g.level());
             long x = Math.min(sf.complete(excluded), sg.complete(excluded));
@@ -214,20 +203,12 @@ public final class CongruenceCheck implements Check {
                                 + ") also compares a_p, which the tables do not give or which differ");
                 return;
             }
-            BigInteger b = plan.bound();
-            if (BigInteger.valueOf(x).compareTo(b) < 0) {
-                notCertified(out, ID, c.row, c.subject, "a_l for every prime l <= B = " + b,
-                        "the tables stop at l = " + x,
-                        "not certified: the congruence holds for every l <= " + x + " in the tables, but Sturm's bound "
-                                + "needs l <= " + b + " (" + plan.derivation() + "; Sturm, LNM 1240, Thm 1)");
-                return;
-            }
-            out.note(ID, c.row.at(), c.subject, "certified: " + claimText + " for every prime l not dividing "
-                    + product(excluded) + ", having checked every l <= B = " + b + " (" + plan.derivation()
-                    + "; Sturm, LNM 1240, Thm 1)");
-            String name = c.j != 0 ? certificateName("congruence", f.id(), g.id(), "p" + p, "j" + c.j)
-                    : certificateName("congruence", f.id(), g.id(), "p" + p);
-            out.certificate(new Certificate(name, certificate(c, best, plan, x, excluded)));
+            Match chosen = best;
+            Plan used = plan;
+            conclude(out, ID, c.row, c.subject, claimText, plan, x, excluded, () -> new Certificate(
+                    c.j != 0 ? certificateName("congruence", f.id(), g.id(), "p" + p, "j" + c.j)
+                            : certificateName("congruence", f.id(), g.id(), "p" + p),
+                    certificate(c, chosen, used, x, excluded)));
         }
 
         private String certificate(Claim c, Match m, Plan plan, long x, Set<Long> excluded) {
@@ -245,25 +226,8 @@ public final class CongruenceCheck implements Check {
             if (!m.identification.isEmpty()) {
                 b.append("identification: ").append(m.identification).append('\n');
             }
-            b.append("theorem: J. Sturm, On the congruence of modular forms, LNM 1240 (1987), Theorem 1, applied to ")
-                    .append(plan.derivation()).append('\n');
-            b.append("route: ").append(plan.route()).append('\n');
-            b.append("level M: ").append(plan.levelValue()).append(", index [SL2(Z):Gamma0(M)] = ")
-                    .append(plan.index()).append('\n');
-            b.append("weight W: ").append(plan.weight()).append('\n');
-            b.append("bound B = floor(W*index/12): ").append(plan.bound()).append('\n');
-            b.append("checked: a_l for every prime l <= ").append(plan.bound()).append(" not dividing ")
-                    .append(product(excluded)).append(plan.comparesAtP() ? ", and a_" + c.p : "").append('\n');
-            b.append("tables: every needed a_l present up to at least l = ").append(x).append('\n');
-            b.append("claim row: ").append(c.row.at()).append('\n');
-            b.append("dataset: ").append(catalog.display()).append('\n');
-            b.append(checksums());
+            b.append(certificateTail(c.row, c.p, plan, x, excluded, ""));
             return b.toString();
-        }
-
-        private static String describe(Form f) {
-            return f.id() + " (level " + f.level() + ", weight " + f.weight() + ", field "
-                    + (f.rational() ? "Q" : "Q[x]/(" + f.fieldPolynomial() + ")") + ")";
         }
 
         /** One choice of primes and identification, and how far the congruence held. */

@@ -11,7 +11,6 @@ import io.github.eigengate.data.Form;
 import io.github.eigengate.data.TableRow;
 import io.github.eigengate.theory.congruence.CongruenceBounds;
 import io.github.eigengate.theory.congruence.CongruenceBounds.Plan;
-import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
@@ -123,17 +122,11 @@ public final class ReducibleCheck implements Check {
                                 + "density of primes (Chebotarev, Brauer–Nesbitt)");
                 return;
             }
-            String ip = indexProblem(f, p);
-            if (ip != null) {
-                out.error(ID, c.row.at(), c.subject, "primes above " + p + " named by factors of "
-                        + f.fieldPolynomial() + " mod " + p, "an index divisible by " + p, "not supported: " + ip);
+            if (reportIndexProblem(out, ID, c.row, c.subject, p, f)) {
                 return;
             }
             Residues.Store s = store(f, p);
-            if (s.notIntegralAt > 0 && s.notIntegralAt <= asLong(c.plans.get(0).bound())) {
-                out.error(ID, c.row.at(), c.subject, "a_" + s.notIntegralAt + "(" + f.id() + ") integral at " + p,
-                        s.notIntegralValue, "a_l of a newform is an algebraic integer, so it has a residue mod every "
-                                + "prime above p; this one has " + p + " in a denominator");
+            if (reportNotIntegral(out, ID, c.row, c.subject, p, c.plans.get(0).bound(), s)) {
                 return;
             }
             Set<Long> excluded = primesDividing(p, f.level());
@@ -219,19 +212,10 @@ public final class ReducibleCheck implements Check {
                                 + "or which differs");
                 return;
             }
-            BigInteger b = plan.bound();
-            if (BigInteger.valueOf(x).compareTo(b) < 0) {
-                notCertified(out, ID, c.row, c.subject, "a_l for every prime l <= B = " + b,
-                        "the tables stop at l = " + x,
-                        "not certified: the congruence holds for every l <= " + x + " in the tables, but Sturm's bound "
-                                + "needs l <= " + b + " (" + plan.derivation() + "; Sturm, LNM 1240, Thm 1)");
-                return;
-            }
-            out.note(ID, c.row.at(), c.subject, "certified: " + claimText + " for every prime l not dividing "
-                    + product(excluded) + ", having checked every l <= B = " + b + " (" + plan.derivation()
-                    + "; Sturm, LNM 1240, Thm 1)");
-            out.certificate(new Certificate(certificateName("reducible", f.id(), "p" + p, "i" + c.i, "j" + c.j),
-                    certificate(c, chosen, plan, x, excluded)));
+            Plan used = plan;
+            conclude(out, ID, c.row, c.subject, claimText, plan, x, excluded, () -> new Certificate(
+                    certificateName("reducible", f.id(), "p" + p, "i" + c.i, "j" + c.j),
+                    certificate(c, chosen, used, x, excluded)));
         }
 
         private String certificate(Claim c, Residues.PrimeAbove prime, Plan plan, long x, Set<Long> excluded) {
@@ -240,26 +224,12 @@ public final class ReducibleCheck implements Check {
             b.append("claim: a_l(").append(c.f.id()).append(") = l^").append(c.i).append(" + l^").append(c.j)
                     .append(" mod a prime above ").append(c.p).append(", for every prime l not dividing ")
                     .append(product(excluded)).append('\n');
-            b.append("form: ").append(c.f.id()).append(" (level ").append(c.f.level()).append(", weight ")
-                    .append(c.f.weight()).append(", field ")
-                    .append(c.f.rational() ? "Q" : "Q[x]/(" + c.f.fieldPolynomial() + ")").append(")\n");
+            b.append("form: ").append(describe(c.f)).append('\n');
             b.append("p: ").append(c.p).append('\n');
             b.append("exponents i, j: ").append(c.i).append(", ").append(c.j).append('\n');
             b.append("prime: ").append(prime).append('\n');
-            b.append("theorem: J. Sturm, On the congruence of modular forms, LNM 1240 (1987), Theorem 1, applied to ")
-                    .append(plan.derivation()).append('\n');
-            b.append("route: ").append(plan.route()).append('\n');
-            b.append("Eisenstein series: G_").append(plan.eisensteinWeight()).append('\n');
-            b.append("level M: ").append(plan.levelValue()).append(", index [SL2(Z):Gamma0(M)] = ")
-                    .append(plan.index()).append('\n');
-            b.append("weight W: ").append(plan.weight()).append('\n');
-            b.append("bound B = floor(W*index/12): ").append(plan.bound()).append('\n');
-            b.append("checked: a_l for every prime l <= ").append(plan.bound()).append(" not dividing ")
-                    .append(product(excluded)).append(plan.comparesAtP() ? ", and a_" + c.p : "").append('\n');
-            b.append("tables: every needed a_l present up to at least l = ").append(x).append('\n');
-            b.append("claim row: ").append(c.row.at()).append('\n');
-            b.append("dataset: ").append(catalog.display()).append('\n');
-            b.append(checksums());
+            b.append(certificateTail(c.row, c.p, plan, x, excluded,
+                    "Eisenstein series: G_" + plan.eisensteinWeight() + "\n"));
             return b.toString();
         }
     }
