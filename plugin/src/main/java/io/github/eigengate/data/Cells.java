@@ -80,21 +80,10 @@ final class Cells {
         return false;
     }
 
-    /** The value of a plain decimal of at most 9 digits that is ≥ 1, else -1 (the caller then reports). */
+    /** The value of a plain decimal in [1, 2^31 − 1], else -1 (the caller then takes the reporting path). */
     static int smallPositive(String s) {
-        int len = s.length();
-        if (len == 0 || len > 9) {
-            return -1;
-        }
-        int v = 0;
-        for (int i = 0; i < len; i++) {
-            char c = s.charAt(i);
-            if (c < '0' || c > '9') {
-                return -1;
-            }
-            v = v * 10 + (c - '0');
-        }
-        return v >= 1 ? v : -1;
+        long v = smallInteger(s);
+        return v >= 1 && v <= Integer.MAX_VALUE ? (int) v : -1;
     }
 
     /**
