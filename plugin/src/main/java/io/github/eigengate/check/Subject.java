@@ -22,10 +22,6 @@ public record Subject(String kind, String name, String detail) {
         return new Subject("form", id, detail);
     }
 
-    public static Subject table(String file) {
-        return new Subject("table", file, "");
-    }
-
     public Subject with(String detail) {
         return new Subject(kind, name, detail);
     }

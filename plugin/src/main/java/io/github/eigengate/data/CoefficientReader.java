@@ -102,10 +102,11 @@ public final class CoefficientReader {
     private void startRun(CsvTable.Row row, String id) {
         Form form = catalog.form(id);
         if (form == null) {
-            if (!id.equals(unknownRun) && catalog.rejectedForms().contains(id)) {
+            // reached once per run of an unknown id: row() skips the rest of the run
+            if (catalog.rejectedForms().contains(id)) {
                 problems.error(row.at("form"), "form=" + id, "a form id from forms.csv", id,
                         "the form's row in forms.csv has an error (reported there); its rows are skipped");
-            } else if (!id.equals(unknownRun)) {
+            } else {
                 problems.error(row.at("form"), "form=" + (id.isEmpty() ? "?" : id), "a form id from forms.csv",
                         id.isEmpty() ? "an empty cell" : id,
                         "no form with this id is declared; its rows are skipped");
@@ -224,7 +225,7 @@ public final class CoefficientReader {
         if (!Cells.isInteger(s)) {
             return "the form has rational coefficients (no field), so a_n must be an integer";
         }
-        return s.length() <= 18 ? Rational.of(Long.parseLong(s)) : Rational.of(new BigInteger(s));
+        return Rational.of(new BigInteger(s)); // small ones were read above, without allocation
     }
 
     private static Object element(NumberField k, String text, Form form) {

@@ -3,7 +3,6 @@ package io.github.eigengate.data;
 import java.util.Arrays;
 import java.util.HashMap;
 import java.util.Map;
-import java.util.function.IntPredicate;
 
 /**
  * The coefficients a_n of one form as read from the tables, each with the row it was read from. Dense index sets
@@ -76,19 +75,6 @@ public final class Coefficients<E> {
     /** The largest n present, 0 if none. */
     public int maxIndex() {
         return indices.length == 0 ? 0 : indices[indices.length - 1];
-    }
-
-    /**
-     * The largest X ≤ {@link #maxIndex()} such that every n in 1..X with {@code wanted(n)} is present.
-     */
-    public int completeUpTo(IntPredicate wanted) {
-        int max = maxIndex();
-        for (int n = 1; n <= max; n++) {
-            if (wanted.test(n) && !has(n)) {
-                return n - 1;
-            }
-        }
-        return max;
     }
 
     /**
