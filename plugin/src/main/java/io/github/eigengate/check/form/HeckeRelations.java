@@ -45,15 +45,13 @@ public final class HeckeRelations implements FormCheck {
             if (p == n) {
                 continue;
             }
-            int pe = 1;
             int m = n;
             while (m % p == 0) {
                 m /= p;
-                pe *= p;
             }
             E an = a.get(n);
             if (m > 1) {
-                coprime(data, out, field, n, an, pe, m, spf);
+                coprime(data, out, field, n, an, p, spf);
                 continue;
             }
             // n = p^e with e ≥ 2
@@ -76,7 +74,7 @@ public final class HeckeRelations implements FormCheck {
                 E pk1 = field.fromInteger(BigInteger.valueOf(p).pow(data.form().weight() - 1));
                 expected = field.subtract(field.multiply(ap, aPrev), field.multiply(pk1, aPrev2));
                 rule = "a_{p^(r+1)} = a_p a_{p^r} - p^(k-1) a_{p^(r-1)} for p ∤ N (p=" + p + ", r+1="
-                        + exponent(n, p) + ")";
+                        + Arith.valuation(n, p) + ")";
             }
             if (!expected.equals(an)) {
                 out.error(ID, a.at(n), Subject.form(data.form().id(), "n=" + n), expected.toString(), an.toString(),
@@ -85,12 +83,15 @@ public final class HeckeRelations implements FormCheck {
         }
     }
 
-    /** Checks a_n = a_{p^e} a_m for the first coprime split n = q^f · m' whose two parts are both present. */
-    private static <E> void coprime(FormData<E> data, FindingSink out, Field<E> field, int n, E an, int pe, int m,
+    /**
+     * Checks a_n = a_{q^f} a_{n/q^f} for the first prime q | n (from the smallest, p) whose two parts are both
+     * present.
+     */
+    private static <E> void coprime(FormData<E> data, FindingSink out, Field<E> field, int n, E an, int p,
                                     int[] spf) {
         Coefficients<E> a = data.coefficients();
         int rest = n;
-        int q = Arith.smallestPrimeFactor(n, spf);
+        int q = p;
         while (rest > 1) {
             int qf = 1;
             while (rest % q == 0) {
@@ -113,14 +114,5 @@ public final class HeckeRelations implements FormCheck {
                 q = Arith.smallestPrimeFactor(rest, spf);
             }
         }
-    }
-
-    private static int exponent(int n, int p) {
-        int e = 0;
-        while (n % p == 0) {
-            n /= p;
-            e++;
-        }
-        return e;
     }
 }
