@@ -11,6 +11,7 @@ import io.github.eigengate.data.Form;
 import io.github.eigengate.data.FormData;
 import io.github.eigengate.data.SpaceKey;
 import io.github.eigengate.data.SpaceRow;
+import io.github.eigengate.theory.Arith;
 import io.github.eigengate.theory.spaces.HurwitzClassNumbers;
 import io.github.eigengate.theory.spaces.TraceFormula;
 import java.math.BigInteger;
@@ -129,7 +130,7 @@ public final class SpaceTraces implements Check {
 
         void add(Coefficients<?> a, int level) {
             for (int n : a.indices()) {
-                if (BigInteger.valueOf(n).gcd(BigInteger.valueOf(level)).intValue() != 1) {
+                if (Arith.gcd(n, level) != 1) {
                     continue;
                 }
                 sum.merge((long) n, Values.trace(a.get(n)), Rational::add);
