@@ -11,7 +11,11 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-/** a_1 of Ramanujan's Δ is τ(1) = 1 (OEIS A000594); of the level-11 form 1 (OEIS A006571). */
+/**
+ * Real coefficients: Δ has τ(1) = 1, τ(2) = −24 (OEIS A000594, reference/tau.csv); "phi" is the orbit of S_2(Γ0(23))
+ * with field x^2 - x - 1, a_1 = 1, a_2 = −x (PARI/GP 2.15.2: {@code apply(lift, mfcoefs(mfeigenbasis(mfinit([23,2],0))[1],
+ * 2))}, as in reference/small-levels.csv).
+ */
 class NormalisationTest {
 
     @TempDir
