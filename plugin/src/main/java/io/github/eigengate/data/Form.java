@@ -1,17 +1,26 @@
 package io.github.eigengate.data;
 
+import io.github.eigengate.arith.DirichletCharacter;
 import io.github.eigengate.arith.Field;
 import io.github.eigengate.arith.NumberField;
 import io.github.eigengate.arith.QPoly;
 import io.github.eigengate.arith.Rationals;
 
 /**
- * One newform (orbit) declared in {@code forms.csv}: level N, weight k, trivial character, and the field its
+ * One newform (orbit) declared in {@code forms.csv}: level N, weight k, character χ mod N, and the field its
  * coefficients a_n lie in.
  *
- * @param field the coefficient field Q[x]/(f), or {@code null} when the coefficients are rational
+ * @param field     the coefficient field Q[x]/(f), or {@code null} when the coefficients are rational
+ * @param character the nebentypus χ; its values lie in the coefficient field through the form's {@code zeta}
+ *                  (see {@link FormData#chi})
  */
-public record Form(String id, int level, int weight, NumberField field, SourceLocation location) {
+public record Form(String id, int level, int weight, NumberField field, SourceLocation location,
+                   DirichletCharacter character) {
+
+    /** A form with the trivial character. */
+    public Form(String id, int level, int weight, NumberField field, SourceLocation location) {
+        this(id, level, weight, field, location, DirichletCharacter.trivial(level));
+    }
 
     public boolean rational() {
         return field == null;
