@@ -72,9 +72,13 @@ public final class HeckeRelations implements FormCheck {
                     continue;
                 }
                 E pk1 = field.fromInteger(BigInteger.valueOf(p).pow(data.form().weight() - 1));
+                boolean trivial = data.form().character().isTrivial();
+                if (!trivial) {
+                    pk1 = field.multiply(data.chi(p), pk1);
+                }
                 expected = field.subtract(field.multiply(ap, aPrev), field.multiply(pk1, aPrev2));
-                rule = "a_{p^(r+1)} = a_p a_{p^r} - p^(k-1) a_{p^(r-1)} for p ∤ N (p=" + p + ", r+1="
-                        + Arith.valuation(n, p) + ")";
+                rule = "a_{p^(r+1)} = a_p a_{p^r} - " + (trivial ? "" : "χ(p) ") + "p^(k-1) a_{p^(r-1)} for p ∤ N (p="
+                        + p + ", r+1=" + Arith.valuation(n, p) + ")";
             }
             if (!expected.equals(an)) {
                 out.error(ID, a.at(n), Subject.form(data.form().id(), "n=" + n), expected.toString(), an.toString(),
