@@ -1,5 +1,6 @@
 package io.github.eigengate.data;
 
+import io.github.eigengate.arith.DirichletCharacter;
 import io.github.eigengate.arith.ExpressionSyntaxException;
 import io.github.eigengate.arith.NumberField;
 import io.github.eigengate.arith.QPoly;
@@ -79,13 +80,19 @@ public final class CatalogReader {
                 return;
             }
             Integer level = Cells.integer(row, "level", 1, Integer.MAX_VALUE, subject, problems);
-            Integer weight = Cells.weight(row, subject, problems);
-            String character = row.get("character");
-            boolean characterOk = character.isEmpty() || character.equals("1");
-            if (!characterOk) {
-                problems.error(row.at("character"), subject, "empty or 1 (the trivial character)", character,
-                        "nontrivial characters are not supported yet");
+            DirichletCharacter character = null;
+            boolean characterOk = level != null;
+            if (level != null) {
+                CharacterCell.Parsed chi = CharacterCell.parse(row.get("character"), level);
+                if (chi.ok()) {
+                    character = chi.character();
+                } else {
+                    problems.error(row.at("character"), subject, CharacterCell.EXPECTED, row.get("character"),
+                            chi.problem());
+                    characterOk = false;
+                }
             }
+            Integer weight = Cells.weight(row, subject, problems, character);
             String fieldText = row.get("field");
             NumberField field = null;
             boolean fieldOk = true;
@@ -98,8 +105,20 @@ public final class CatalogReader {
                     field = cached.field;
                 }
             }
-            if (level != null && weight != null && characterOk && fieldOk) {
-                forms.put(id, new Form(id, level, weight, field, row.at()));
+            NumberField.Element zeta = null;
+            boolean zetaOk = true;
+            if (character != null && fieldOk) {
+                ZetaCell.Parsed z = ZetaCell.parse(row.get("zeta"), character, field, row.has("zeta"));
+                if (z.ok()) {
+                    zeta = z.zeta();
+                } else {
+                    problems.error(row.at("zeta"), subject, z.expected(),
+                            row.get("zeta").isEmpty() ? "an empty cell" : row.get("zeta"), z.problem());
+                    zetaOk = false;
+                }
+            }
+            if (level != null && weight != null && characterOk && fieldOk && zetaOk) {
+                forms.put(id, new Form(id, level, weight, field, row.at(), character, zeta));
             } else {
                 rejected.add(id);
             }

@@ -1,5 +1,6 @@
 package io.github.eigengate.data;
 
+import io.github.eigengate.arith.DirichletCharacter;
 import java.math.BigInteger;
 
 /** Parsing of single cells, reporting what was expected when a cell is malformed. */
@@ -47,14 +48,34 @@ final class Cells {
     static final int MAX_WEIGHT = 10_000;
 
     /**
-     * The weight column: an even integer in [2, 10000]. With the trivial character (the only one supported) −I lies in
-     * Γ0(N) and acts on S_k as (−1)^k, so there are no forms of odd weight.
+     * The weight column with the trivial character: an even integer in [2, 10000]. −I lies in Γ0(N) and acts on S_k
+     * as (−1)^k, so there are no forms of odd weight.
      */
     static Integer weight(CsvTable.Row row, String subject, Problems problems) {
+        return weight(row, subject, problems, DirichletCharacter.trivial(1));
+    }
+
+    /**
+     * The weight column of a row with character χ: an integer k in [1, 10000] with (−1)^k = χ(−1), since −I acts on
+     * S_k(N, χ) as χ(−1)(−1)^k, so S_k(N, χ) = 0 otherwise (Diamond–Shurman §4.3, Miyake §4.3, from memory). With
+     * {@code chi == null} (a malformed character cell, reported already) only the range is checked.
+     */
+    static Integer weight(CsvTable.Row row, String subject, Problems problems,
+                          DirichletCharacter chi) {
         Integer k = integer(row, "weight", 1, MAX_WEIGHT, subject, problems);
-        if (k != null && k % 2 != 0) {
+        if (k == null || chi == null) {
+            return k;
+        }
+        if (chi.isTrivial() && k % 2 != 0) {
             problems.error(row.at("weight"), subject, "an even weight", Integer.toString(k),
                     "with the trivial character there are no forms of odd weight (−I ∈ Γ0(N) acts as (−1)^k)");
+            return null;
+        }
+        boolean odd = chi.isOdd();
+        if (!chi.isTrivial() && (k % 2 != 0) != odd) {
+            problems.error(row.at("weight"), subject, odd ? "an odd weight" : "an even weight", Integer.toString(k),
+                    "S_k(N, χ) = 0: χ(−1) = " + (odd ? "−1" : "1") + " but (−1)^k = " + (odd ? "1" : "−1")
+                            + ", and −I acts on S_k(N, χ) as χ(−1)(−1)^k");
             return null;
         }
         return k;

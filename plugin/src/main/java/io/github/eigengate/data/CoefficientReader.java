@@ -202,7 +202,9 @@ public final class CoefficientReader {
         }
 
         FormData<E> finish() {
-            return new FormData<>(form, field, builder.build());
+            @SuppressWarnings("unchecked")
+            E zeta = (E) form.zeta();
+            return new FormData<>(form, field, builder.build(), zeta);
         }
     }
 
@@ -228,7 +230,8 @@ public final class CoefficientReader {
         return Rational.of(new BigInteger(s)); // small ones were read above, without allocation
     }
 
-    private static Object element(NumberField k, String text, Form form) {
+    /** Also reads the {@code zeta} cell of {@code forms.csv} (the same grammar as a_n). */
+    static Object element(NumberField k, String text, Form form) {
         String s = Cells.compact(text);
         if (s.startsWith("[")) {
             if (!s.endsWith("]")) {

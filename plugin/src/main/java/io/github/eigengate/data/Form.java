@@ -13,13 +13,21 @@ import io.github.eigengate.arith.Rationals;
  * @param field     the coefficient field Q[x]/(f), or {@code null} when the coefficients are rational
  * @param character the nebentypus χ; its values lie in the coefficient field through the form's {@code zeta}
  *                  (see {@link FormData#chi})
+ * @param zeta      the primitive m-th root of unity of the field with χ(g) = zeta^e, for a character of order
+ *                  m &gt; 2 (verified by the reader: Φ_m(zeta) = 0); {@code null} when m ≤ 2
  */
 public record Form(String id, int level, int weight, NumberField field, SourceLocation location,
-                   DirichletCharacter character) {
+                   DirichletCharacter character, NumberField.Element zeta) {
 
     /** A form with the trivial character. */
     public Form(String id, int level, int weight, NumberField field, SourceLocation location) {
         this(id, level, weight, field, location, DirichletCharacter.trivial(level));
+    }
+
+    /** A form whose character has order at most 2 (no root of unity needed). */
+    public Form(String id, int level, int weight, NumberField field, SourceLocation location,
+                DirichletCharacter character) {
+        this(id, level, weight, field, location, character, null);
     }
 
     public boolean rational() {

@@ -109,6 +109,6 @@ public final class Gate {
 
     @SuppressWarnings({"unchecked", "rawtypes"})
     private static FormData<?> empty(Form f) {
-        return new FormData(f, f.coefficientField(), new Coefficients.Builder<>().build());
+        return new FormData(f, f.coefficientField(), new Coefficients.Builder<>().build(), f.zeta());
     }
 }

@@ -65,8 +65,8 @@ class GateTest {
                         + "'level' is out of range",
                 "data/forms.csv:5:3: error [table-format] form=f2: expected an integer in [1, 10000], found -4; "
                         + "'weight' is out of range",
-                "data/forms.csv:6:4: error [table-format] form=f3: expected empty or 1 (the trivial character), "
-                        + "found chi; nontrivial characters are not supported yet",
+                "data/forms.csv:6:4: error [table-format] form=f3: expected empty, 1, or g:a/b pairs joined by ';' "
+                        + "with units 1 < g < N that generate (Z/NZ)^×, found chi; pair 1 'chi' is not of the form g:a/b",
                 "data/forms.csv:7:5: error [table-format] form=f4: expected a monic irreducible polynomial in x with "
                         + "integer coefficients, found x^2-1; the field polynomial is reducible over Q: it factors "
                         + "as (x - 1)*(x + 1)",

@@ -1,5 +1,6 @@
 package io.github.eigengate.check.form;
 
+import io.github.eigengate.arith.Field;
 import io.github.eigengate.arith.QPoly;
 import io.github.eigengate.arith.Rational;
 import io.github.eigengate.arith.RealRoots;
@@ -21,6 +22,13 @@ import java.math.BigInteger;
  * <p>Decided exactly: a_p is totally real (trivial character), so the bound holds in every embedding iff every root
  * α of the characteristic polynomial χ of a_p is real with α² ≤ 4p^{k−1}: a Sturm count of the distinct roots of χ
  * in [−2p^{(k−1)/2}, 2p^{(k−1)/2}], the irrational ends handled exactly ({@link RealRoots#allRootsRealWithSquareAtMost}).
+ *
+ * <p>With a nontrivial character χ: b = χ̄(p)·a_p² must have every conjugate real in [0, 4p^{k−1}] (the roots of its
+ * characteristic polynomial, {@link RealRoots#allRootsRealIn}). For an embedding σ, |σ(b)| = |σ(a_p)|², and σ(b) is
+ * real and ≥ 0 iff conj σ(a_p) = σ(χ̄(p))·σ(a_p); so the test is equivalent to the bound together with the adjoint
+ * relation ā_p = χ̄(p)a_p (Shimura, <i>Introduction to the Arithmetic Theory of Automorphic Functions</i>, Thm 3.52,
+ * from memory), which a newform satisfies in every embedding (docs/checks.md proves it). Weight 1: |a_p| ≤ 2
+ * (Deligne–Serre 1974), the same test with 4p^0 = 4.
  */
 public final class RamanujanBound implements FormCheck {
 
@@ -38,6 +46,10 @@ public final class RamanujanBound implements FormCheck {
 
     @Override
     public <E> void check(FormData<E> data, Catalog catalog, FindingSink out) {
+        if (!data.form().character().isTrivial()) {
+            checkWithCharacter(data, out);
+            return;
+        }
         Coefficients<E> a = data.coefficients();
         int level = data.form().level();
         int k = data.form().weight();
@@ -67,6 +79,64 @@ public final class RamanujanBound implements FormCheck {
                                 + " (or a_p is not totally real)");
             }
         }
+    }
+
+    /** The test on b = χ̄(p)·a_p²: every conjugate real in [0, 4p^{k−1}]. */
+    private static <E> void checkWithCharacter(FormData<E> data, FindingSink out) {
+        Coefficients<E> a = data.coefficients();
+        Field<E> field = data.field();
+        int level = data.form().level();
+        int k = data.form().weight();
+        int[] spf = Arith.sharedSmallestPrimeFactors(a.maxIndex());
+        for (int p : a.indices()) {
+            if (p < 2 || Arith.smallestPrimeFactor(p, spf) != p || level % p == 0) {
+                continue;
+            }
+            E ap = a.get(p);
+            BigInteger bound = BigInteger.valueOf(p).pow(k - 1).shiftLeft(2); // 4 p^{k-1}
+            E chi = data.chi(p);
+            E b = field.multiply(field.inverse(chi), field.multiply(ap, ap)); // χ̄(p) = χ(p)^{−1}
+            Subject subject = Subject.form(data.form().id(), "n=" + p);
+            String expected = "every embedding with χ̄(p)*a_p^2 real in [0, 4*p^(k-1)] = [0, " + bound + "]";
+            String bad;
+            if (b instanceof Rational r) {
+                if (r.signum() >= 0 && r.compareTo(Rational.of(bound)) <= 0) {
+                    continue;
+                }
+                bad = r.signum() < 0 ? "negative" : "large";
+                out.error(ID, a.at(p), subject, expected, "a_p = " + ap + ", χ(p) = " + chi
+                        + ", χ̄(p)*a_p^2 = " + r, reason(bad, k, p));
+                continue;
+            }
+            QPoly poly = Values.charPoly(b);
+            if (RealRoots.allRootsRealIn(poly, Rational.ZERO, Rational.of(bound))) {
+                continue;
+            }
+            bad = RealRoots.allRootsRealIn(poly, Rational.ZERO, rootBound(poly)) ? "large" : "not real";
+            out.error(ID, a.at(p), subject, expected, "a_p = " + ap + ", χ(p) = " + chi
+                    + ", χ̄(p)*a_p^2 with characteristic polynomial " + poly, reason(bad, k, p));
+        }
+    }
+
+    private static String reason(String bad, int k, int p) {
+        if (bad.equals("large")) {
+            return (k == 1 ? "the Deligne–Serre bound |a_p| <= 2" : "Deligne's bound |a_p| <= 2 p^((k-1)/2)")
+                    + " fails in some complex embedding at p=" + p;
+        }
+        return "χ̄(p)*a_p^2 is not real and >= 0 in every embedding, so conj(a_p) = χ̄(p)*a_p fails at p="
+                + p + " (is a_p replaced by its complex conjugate, or χ(p) wrong?)";
+    }
+
+    /** 1 + max |c_i| for a monic polynomial: every complex root has absolute value below it (Cauchy). */
+    private static Rational rootBound(QPoly f) {
+        Rational m = Rational.ZERO;
+        for (Rational c : f.coefficients()) {
+            Rational abs = c.signum() < 0 ? c.negate() : c;
+            if (abs.compareTo(m) > 0) {
+                m = abs;
+            }
+        }
+        return m.add(Rational.ONE);
     }
 
     /** Whether every root α of χ is real with α² ≤ bound (one Sturm sequence, evaluated exactly at ±√bound). */
