@@ -64,11 +64,44 @@ public final class CharacterCell {
         if (modulus <= 2) {
             return fail("every character mod " + modulus + " is trivial; write 1 or leave the cell empty");
         }
+        for (int i = 0; i < g.length; i++) {
+            long order = multiplicativeOrder(g[i], modulus);
+            long den = b[i] / gcd(Math.floorMod(a[i], b[i]), b[i]);
+            if (order > 0 && order % den != 0) {
+                return fail("χ(" + g[i] + ") = exp(2πi·" + a[i] + "/" + b[i] + ") has order " + den
+                        + ", which does not divide the order " + order + " of " + g[i] + " mod " + modulus);
+            }
+        }
         try {
             return new Parsed(DirichletCharacter.fromValues(modulus, g, a, b), null);
         } catch (IllegalArgumentException e) {
             return fail(e.getMessage());
         }
+    }
+
+    /** The order of g in (Z/NZ)^×, or 0 when g is not a unit or N is too large to walk (fromValues reports). */
+    private static long multiplicativeOrder(long g, int modulus) {
+        if (modulus > DirichletCharacter.MAX_MODULUS || gcd(Math.floorMod(g, modulus), modulus) != 1) {
+            return 0;
+        }
+        long x = Math.floorMod(g, modulus);
+        long r = x;
+        for (long k = 1; k <= modulus; k++) {
+            if (r == 1 % modulus) {
+                return k;
+            }
+            r = r * x % modulus;
+        }
+        return 0;
+    }
+
+    private static long gcd(long a, long b) {
+        while (b != 0) {
+            long t = a % b;
+            a = b;
+            b = t;
+        }
+        return Math.abs(a);
     }
 
     private static Parsed fail(String why) {

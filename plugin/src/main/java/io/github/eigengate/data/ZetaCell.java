@@ -30,7 +30,7 @@ final class ZetaCell {
 
     static Parsed parse(String text, DirichletCharacter chi, NumberField field, boolean column) {
         int m = chi.order();
-        String root = "a primitive " + m + "-th root of unity in the coefficient field (Φ_" + m + "(zeta) = 0)";
+        String root = "a root of unity of order " + m + " in the coefficient field (Φ_" + m + "(zeta) = 0)";
         if (m <= 2) {
             if (text.isEmpty()) {
                 return new Parsed(null, null, null);
@@ -40,7 +40,7 @@ final class ZetaCell {
         }
         if (field == null) {
             return new Parsed(null, "a field containing Q(χ) = Q(ζ_" + m + ")", "the coefficients are rational (no"
-                    + " field), but Q has no primitive " + m + "-th root of unity: χ of order " + m
+                    + " field), but Q has no root of unity of order " + m + ": χ of order " + m
                     + " needs a coefficient field containing its values, and zeta in it");
         }
         if (field.degree() % chi.orbitSize() != 0) {
@@ -60,8 +60,7 @@ final class ZetaCell {
         NumberField.Element z = (NumberField.Element) parsed;
         NumberField.Element value = evaluate(cyclotomic(m), z, field);
         if (!value.isZero()) {
-            return new Parsed(null, root, "Φ_" + m + "(zeta) = " + value + " ≠ 0: zeta is not a primitive " + m
-                    + "-th root of unity" + (z.pow(m).equals(field.one()) ? " (it is a root of unity of smaller order)"
+            return new Parsed(null, root, "Φ_" + m + "(zeta) = " + value + " ≠ 0: zeta is not a root of unity of order " + m + (z.pow(m).equals(field.one()) ? " (it is a root of unity of smaller order)"
                     : ""));
         }
         return new Parsed(z, null, null);

@@ -1,0 +1,138 @@
+package io.github.eigengate.engine;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * Forms with a nontrivial character: the dataset datasets/characters (fixtures-gp/characters.gp, PARI/GP 2.15.2:
+ * mfeigenbasis(mfinit([N,k,[znstar(N,1),chi]],0)), orders 2, 3, 4, 6, 8, two generators, odd weight, weight 1) passes
+ * (RealDatasetsTest); each planted error below fails, naming file, line, form and n.
+ */
+class CharactersTest {
+
+    static final String COEFFS = "datasets/characters/coefficients.csv";
+
+    @TempDir
+    Path dir;
+
+    private List<String> run(Fixture f) throws IOException {
+        String forms = Files.readString(Fixture.dataset("characters").resolve("forms.csv"));
+        Datasets.write(dir, "forms.csv", forms, "coefficients.csv", f.text());
+        return Datasets.errors(Datasets.run(dir));
+    }
+
+    private static String has(List<String> errors, String prefix) {
+        return errors.stream().filter(e -> e.startsWith(prefix)).findFirst()
+                .orElseThrow(() -> new AssertionError("no finding " + prefix + "\n" + String.join("\n", errors)));
+    }
+
+    @Test
+    void wrongCharacterValueInAPrimeSquare() throws IOException {
+        // lev13_wt2_chi6_o1: K = Q(ζ6) = Q[x]/(x^2 - x + 1), zeta = x, χ(2) = x (2:2/12). PARI: a_2 = -x - 1,
+        // a_4 = x = a_2^2 - χ(2)*2 (a_2^2 = 3x mod x^2 - x + 1). Planted: a_4 written with χ̄(2) = 1 - x instead,
+        // a_2^2 - (1 - x)*2 = 5*x - 2.
+        Fixture f = Fixture.of(COEFFS);
+        String form = "lev13_wt2_chi6_o1";
+        assertEquals("-x - 1", f.valueOf(form, 2));
+        assertEquals("x", f.valueOf(form, 4));
+        f.plant(form, 4, "5*x - 2");
+        List<String> errors = run(f);
+        String e = has(errors, "data/coefficients.csv:" + f.lineOf(form, 4) + ": error [hecke-relations] form=" + form
+                + " n=4: expected x, found 5*x - 2; ");
+        assertTrue(e.contains("χ(p) p^(k-1)"), e);
+    }
+
+    @Test
+    void coefficientReplacedByItsComplexConjugate() throws IOException {
+        // lev13_wt2_chi6_o1: a_3 = 2*x - 2 (PARI); χ(3) = zeta^4 = -x (3 = 2^4 mod 13), of order 3, so
+        // conj(a_3) = χ̄(3) a_3 = x^2 (2x - 2) = (x - 1)(2x - 2) = -2*x (mod x^2 - x + 1); then
+        // χ̄(3)·(-2x)^2 = (x - 1)·4x^2 = 4(x - 1)^2 = -4x has conjugates -4ζ6^{±1}, not real
+        Fixture f = Fixture.of(COEFFS);
+        String form = "lev13_wt2_chi6_o1";
+        assertEquals("2*x - 2", f.valueOf(form, 3));
+        f.plant(form, 3, "-2*x");
+        List<String> errors = run(f);
+        assertTrue(errors.contains("data/coefficients.csv:" + f.lineOf(form, 3) + ": error [ramanujan-bound] form="
+                + form + " n=3: expected every embedding with χ̄(p)*a_p^2 real in [0, 4*p^(k-1)] = [0, 12], found "
+                + "a_p = -2*x, χ(p) = -x, χ̄(p)*a_p^2 with characteristic polynomial x^2 + 4*x + 16; χ̄(p)*a_p^2 is"
+                + " not real and >= 0 in every embedding, so conj(a_p) = χ̄(p)*a_p fails at p=3 (is a_p replaced by"
+                + " its complex conjugate, or χ(p) wrong?)"), String.join("\n", errors));
+    }
+
+    @Test
+    void ramanujanViolationInOnePairOfEmbeddingsOnly() throws IOException {
+        // lev13_wt3_chi4_o1, K = Q[x]/(x^4 + 2x^2 - 20x + 26) = Q(i, √10), a CM field. a_2 is multiplied by the
+        // totally real unit r = 3 + √10, which keeps conj(a_2) = χ̄(2) a_2 but makes |a_2|^2 = 25.65 > 16 in one pair
+        // of embeddings and 0.35 in the other (gp: Q = y^4 + 2*y^2 - 20*y + 26; s = nfroots(Q, x^2 - 10);
+        // r = Mod(3 + lift(s[2]), Q) = 1/7*y^3 - 1/7*y^2 - 4/7*y + 5/7; lift(r * a_2) = 2/21*y^3 + 5/21*y^2 - 5/7*y
+        // + 17/21; |.|^2 over polroots(Q) = 0.3509, 0.3509, 25.649, 25.649)
+        Fixture f = Fixture.of(COEFFS);
+        String form = "lev13_wt3_chi4_o1";
+        assertEquals("-4/21*x^3 - 10/21*x^2 - 11/7*x + 29/21", f.valueOf(form, 2));
+        f.plant(form, 2, "2/21*x^3 + 5/21*x^2 - 5/7*x + 17/21");
+        List<String> errors = run(f);
+        String e = has(errors, "data/coefficients.csv:" + f.lineOf(form, 2) + ": error [ramanujan-bound] form="
+                + form + " n=2: expected every embedding with χ̄(p)*a_p^2 real in [0, 4*p^(k-1)] = [0, 16], found a_p = "
+                + "2/21*x^3 + 5/21*x^2 - 5/7*x + 17/21, χ(p) = ");
+        assertTrue(e.endsWith("; Deligne's bound |a_p| <= 2 p^((k-1)/2) fails in some complex embedding at p=2"), e);
+    }
+
+    /** Each malformed character or zeta cell is a table-format error with file, line, column and what was expected. */
+    @Test
+    void malformedCharacterCells() {
+        String forms = String.join("\n",
+                "id,level,weight,character,field,zeta",
+                "notgen,13,2,4:1/6,x^2 - x + 1,x",             // 4 = 2^2 generates only the squares mod 13
+                "inconsistent,13,2,2:1/6;4:1/6,x^2 - x + 1,x", // χ(4) must be χ(2)^2
+                "order,13,2,2:1/5,x^2 - x + 1,x",              // 2 has order 12 mod 13: ζ5^12 ≠ 1
+                "nozeta,13,2,2:2/12,x^2 - x + 1,",
+                "smallzeta,13,2,2:2/12,x^2 - x + 1,x - 1",     // x - 1 = ζ6^2 has order 3
+                "notroot,13,2,2:2/12,x^2 - x + 1,x + 1",
+                "zetaquad,7,3,3:1/2,,-1",
+                "ratfield,13,2,2:2/12,,",
+                "parity,7,2,3:1/2,,",                          // χ = (−7/·) is odd, the weight even
+                "nonunit,21,2,3:1/2;2:1/6,x^2 - x + 1,x",
+                "trivialodd,11,3,,,",
+                "");
+        List<String> errors = Datasets.errors(Datasets.run(Datasets.write(dir, "forms.csv", forms)));
+        assertEquals(List.of(
+                "data/forms.csv:2:4: error [table-format] form=notgen: expected empty, 1, or g:a/b pairs joined by ';' with units 1 < g < N that generate (Z/NZ)^×, found 4:1/6; the generators do not generate (Z/13Z)^×: they reach 6 of its 12 elements",
+                "data/forms.csv:3:4: error [table-format] form=inconsistent: expected empty, 1, or g:a/b pairs joined by ';' with units 1 < g < N that generate (Z/NZ)^×, found 2:1/6;4:1/6; the values are not those of a character: two products of the generators equal 4 mod 13 but get different values",
+                "data/forms.csv:4:4: error [table-format] form=order: expected empty, 1, or g:a/b pairs joined by ';' with units 1 < g < N that generate (Z/NZ)^×, found 2:1/5; χ(2) = exp(2πi·1/5) has order 5, which does not divide the order 12 of 2 mod 13",
+                "data/forms.csv:5:6: error [table-format] form=nozeta: expected a root of unity of order 6 in the coefficient field (Φ_6(zeta) = 0), found an empty cell; the cell is empty: a character of order 6 > 2 needs zeta, which fixes how Q(χ) lies in the field (χ(g) = zeta^(a·m/b) for g:a/b)",
+                "data/forms.csv:6:6: error [table-format] form=smallzeta: expected a root of unity of order 6 in the coefficient field (Φ_6(zeta) = 0), found x - 1; Φ_6(zeta) = -2*x + 2 ≠ 0: zeta is not a root of unity of order 6 (it is a root of unity of smaller order)",
+                "data/forms.csv:7:6: error [table-format] form=notroot: expected a root of unity of order 6 in the coefficient field (Φ_6(zeta) = 0), found x + 1; Φ_6(zeta) = 2*x ≠ 0: zeta is not a root of unity of order 6",
+                "data/forms.csv:8:6: error [table-format] form=zetaquad: expected an empty cell (χ has order 2, its values are ±1), found -1; zeta is given only for a character of order m > 2, where it fixes how Q(χ) lies in the coefficient field",
+                "data/forms.csv:9:6: error [table-format] form=ratfield: expected a field containing Q(χ) = Q(ζ_6), found an empty cell; the coefficients are rational (no field), but Q has no root of unity of order 6: χ of order 6 needs a coefficient field containing its values, and zeta in it",
+                "data/forms.csv:10:3: error [table-format] form=parity: expected an odd weight, found 2; S_k(N, χ) = 0: χ(−1) = −1 but (−1)^k = 1, and −I acts on S_k(N, χ) as χ(−1)(−1)^k",
+                "data/forms.csv:11:4: error [table-format] form=nonunit: expected empty, 1, or g:a/b pairs joined by ';' with units 1 < g < N that generate (Z/NZ)^×, found 3:1/2;2:1/6; 3 is not a unit g with 1 < g < 21",
+                "data/forms.csv:12:3: error [table-format] form=trivialodd: expected an even weight, found 3; with the trivial character there are no forms of odd weight (−I ∈ Γ0(N) acts as (−1)^k)"), errors);
+    }
+
+    /**
+     * Li's trichotomy at p | N on PARI/GP forms: lev9_wt4_chi3_o1 (cond χ = 9 = N: |a_3|^2 = 27, PARI a_3 = -3*x);
+     * lev10_wt3_chi4_o1 (2 ‖ 10, cond χ = 5: a_2^2 = χ'(2)*2 = 2*x with PARI a_2 = -x - 1; planted x - 1, whose
+     * square -2*x is χ̄'(2)*2); lev20_wt3_chi4_o1 (4 | 20, cond χ = 5: a_2 = 0).
+     */
+    @Test
+    void primesDividingTheLevelWithACharacter() throws IOException {
+        Fixture f = Fixture.of(COEFFS);
+        assertEquals("-3*x", f.valueOf("lev9_wt4_chi3_o1", 3));
+        assertEquals("-x - 1", f.valueOf("lev10_wt3_chi4_o1", 2));
+        assertEquals("0", f.valueOf("lev20_wt3_chi4_o1", 2));
+        f.plant("lev9_wt4_chi3_o1", 3, "-3*x + 1").plant("lev10_wt3_chi4_o1", 2, "x - 1")
+                .plant("lev20_wt3_chi4_o1", 2, "1");
+        List<String> errors = run(f).stream().filter(e -> e.contains("[level-primes]")).toList();
+        assertEquals(List.of(
+                "data/coefficients.csv:" + f.lineOf("lev9_wt4_chi3_o1", 3) + ": error [level-primes] form=lev9_wt4_chi3_o1 n=3: expected |a_p|^2 = p^(k-1) = 27 in every embedding, found -3*x + 1, a_p + p^(k-1)/a_p with characteristic polynomial x^4 + 1333/314*x^3 - 99615/628*x^2 - 106439/314*x + 4301203/628; |a_p| = p^((k-1)/2) when the p-part of cond(χ) is that of N (p=3, N=9, cond(χ)=9; Li 1975, Thm 3(iii))",
+                "data/coefficients.csv:" + f.lineOf("lev10_wt3_chi4_o1", 2) + ": error [level-primes] form=lev10_wt3_chi4_o1 n=2: expected a_p^2 = χ'(p)*p^(k-2) = 2*x, found a_p^2 = -2*x; a_p^2 = χ'(p) p^(k-2), χ' the prime-to-p part of χ, when p exactly divides N but not cond(χ) (p=2, N=10, cond(χ)=5; Li 1975, Thm 3(i))",
+                "data/coefficients.csv:" + f.lineOf("lev20_wt3_chi4_o1", 2) + ": error [level-primes] form=lev20_wt3_chi4_o1 n=2: expected 0, found 1; a_p = 0 when p^2 divides N and the p-part of cond(χ) is smaller than that of N (p=2, N=20, cond(χ)=5; Li 1975, Thm 3(ii))"), errors);
+    }
+}
