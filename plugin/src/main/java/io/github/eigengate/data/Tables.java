@@ -24,7 +24,7 @@ public final class Tables {
     public static final List<String> CONGRUENCES_REQUIRED = List.of("form", "other", "p");
     public static final List<String> CONGRUENCES_OPTIONAL = List.of("twist", "prime", "other_prime");
     public static final List<String> REDUCIBLE_REQUIRED = List.of("form", "p", "i", "j");
-    public static final List<String> REDUCIBLE_OPTIONAL = List.of("prime");
+    public static final List<String> REDUCIBLE_OPTIONAL = List.of("prime", "psi", "phi");
     public static final List<String> WEIGHTS_REQUIRED = List.of("p");
     public static final List<String> WEIGHTS_OPTIONAL =
             List.of("form", "prime", "local", "serre_weight", "weights", "shape", "exponents");

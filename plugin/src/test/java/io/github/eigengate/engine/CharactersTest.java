@@ -135,4 +135,54 @@ class CharactersTest {
                 "data/coefficients.csv:" + f.lineOf("lev10_wt3_chi4_o1", 2) + ": error [level-primes] form=lev10_wt3_chi4_o1 n=2: expected a_p^2 = χ'(p)*p^(k-2) = 2*x, found a_p^2 = -2*x; a_p^2 = χ'(p) p^(k-2), χ' the prime-to-p part of χ, when p exactly divides N but not cond(χ) (p=2, N=10, cond(χ)=5; Li 1975, Thm 3(i))",
                 "data/coefficients.csv:" + f.lineOf("lev20_wt3_chi4_o1", 2) + ": error [level-primes] form=lev20_wt3_chi4_o1 n=2: expected 0, found 1; a_p = 0 when p^2 divides N and the p-part of cond(χ) is smaller than that of N (p=2, N=20, cond(χ)=5; Li 1975, Thm 3(ii))"), errors);
     }
+
+    /**
+     * Congruences between forms with a character (PARI/GP data of datasets/characters): lev13_wt2_chi6_o1 with
+     * itself mod 7 at one prime above 7 is certified (one character, p ∤ 13·6, M = 13², B = ⌊2·182/12⌋ = 30); at the
+     * two different primes (7, x + 4) and (7, x + 2) above 7 (the roots 3 and 5 of x^2 - x + 1 mod 7, so ζ6 reduces
+     * to 3 and to 5) the characters reduce differently and the claim is false; forms with different characters are
+     * not certified.
+     */
+    @Test
+    void congruencesWithACharacter() throws IOException {
+        Path src = Fixture.dataset("characters");
+        Datasets.write(dir, "forms.csv", Files.readString(src.resolve("forms.csv")), "coefficients.csv",
+                Files.readString(src.resolve("coefficients.csv")), "congruences.csv", String.join("\n",
+                        "form,other,p,twist,prime,other_prime",
+                        "lev13_wt2_chi6_o1,lev13_wt2_chi6_o1,7,0,x + 4,x + 4",
+                        "lev13_wt2_chi6_o1,lev13_wt2_chi6_o1,7,0,x + 4,x + 2",
+                        "lev13_wt2_chi6_o1,lev21_wt2_chi6_o1,5,0,,", ""));
+        List<String> lines = Datasets.lines(Datasets.run(dir)).stream().filter(l -> l.contains("[congruence]"))
+                .toList();
+        assertEquals(List.of(
+                "data/congruences.csv:2: note [congruence] congruence=lev13_wt2_chi6_o1~lev13_wt2_chi6_o1 p=7: certified: a_l(lev13_wt2_chi6_o1) = l^0*a_l(lev13_wt2_chi6_o1) mod a prime above 7 for every prime l not dividing 91, having checked every l <= B = 30 (f♭ − g♭ (weight 2) on Γ0(169), a_p compared too; Sturm, LNM 1240, Thm 1)",
+                "data/congruences.csv:3: error [congruence] congruence=lev13_wt2_chi6_o1~lev13_wt2_chi6_o1 p=7: expected an identification of residue fields with zeta_lev13_wt2_chi6_o1 = zeta_lev13_wt2_chi6_o1, found none at the primes above 7; the congruence is false: under every choice of primes above 7 the reductions of χ_f and χ_g differ, so det ρ̄_f = (χ_f mod 𝔭)ω^(k_f-1) is not det(ρ̄_g ⊗ ω^j) = (χ_g mod 𝔭)ω^(k_g-1+2j) (Chebotarev, Brauer–Nesbitt)",
+                "data/congruences.csv:4: error [congruence] congruence=lev13_wt2_chi6_o1~lev21_wt2_chi6_o1 p=5: expected a certifiable congruence, found a_l(lev13_wt2_chi6_o1) = l^0*a_l(lev21_wt2_chi6_o1) mod a prime above 5; not certified: the characters of the two forms differ (2:1/6 mod 13, 8:1/2;10:1/6 mod 21): the Sturm-type bound is implemented for one common character only"), lines);
+    }
+
+    /**
+     * Eisenstein rows with characters ψ, φ (columns psi, phi) for lev13_wt2_chi6_o1 (χ = 2:2/12 of order 6) mod 7:
+     * ψφ = 1 ≠ χ is false (7 ∤ 13·6); ψ = χ, φ = 1 meets the determinant and is not certified (no bound with
+     * characters); k − 1 = 1 ≢ i + j = 0 mod 6 is false; a malformed ψ and one of order 4 are table-format errors.
+     */
+    @Test
+    void eisensteinRowsWithCharacters() throws IOException {
+        Path src = Fixture.dataset("characters");
+        Datasets.write(dir, "forms.csv", Files.readString(src.resolve("forms.csv")), "coefficients.csv",
+                Files.readString(src.resolve("coefficients.csv")), "reducible.csv", String.join("\n",
+                        "form,p,i,j,prime,psi,phi",
+                        "lev13_wt2_chi6_o1,7,0,1,x + 4,,",
+                        "lev13_wt2_chi6_o1,7,0,1,x + 4,2:2/12,",
+                        "lev13_wt2_chi6_o1,7,0,0,x + 4,2:2/12,",
+                        "lev13_wt2_chi6_o1,7,0,1,x + 4,4:1/6,",
+                        "lev13_wt2_chi6_o1,7,0,1,x + 4,2:1/4,", ""));
+        List<String> lines = Datasets.lines(Datasets.run(dir)).stream()
+                .filter(l -> l.contains("[reducible]") || l.contains("reducible.csv")).toList();
+        assertEquals(List.of(
+                "data/reducible.csv:5:6: error [table-format] reducible=lev13_wt2_chi6_o1 p=7: expected empty, 1, or g:a/b pairs joined by ';' with units 1 < g < N that generate (Z/NZ)^× (a character mod N = 13), found 4:1/6; the generators do not generate (Z/13Z)^×: they reach 6 of its 12 elements",
+                "data/reducible.csv:6:6: error [table-format] reducible=lev13_wt2_chi6_o1 p=7: expected a character whose order divides that of χ_f (6), so its values lie in the form's field, found 2:1/4; its order is 4",
+                "data/reducible.csv:2: error [reducible] reducible=lev13_wt2_chi6_o1 p=7 i=0 j=1: expected ψφ = χ_f, found ψφ = 1, χ_f = 2:1/6; the claim is false: ρ̄_f^ss ≅ ψω^i ⊕ φω^j gives det ρ̄_f = ψφω^(i+j), while det ρ̄_f = (χ_f mod 𝔭)ω^(k-1); p ∤ N and p ∤ ord(ψφχ̄_f), so ψφ ≠ χ_f stays different mod 𝔭",
+                "data/reducible.csv:3: error [reducible] reducible=lev13_wt2_chi6_o1 p=7 i=0 j=1: expected a certifiable congruence, found a_l(lev13_wt2_chi6_o1) = l^0 + l^1 mod a prime above 7; not certified: the Sturm-type bound for an Eisenstein series with characters ψ, φ is not implemented (see docs/congruences.md)",
+                "data/reducible.csv:4: error [reducible] reducible=lev13_wt2_chi6_o1 p=7 i=0 j=0: expected k - 1 = i + j mod 6, found k=2, i=0, j=0; the claim is false: det of the mod-p representation of lev13_wt2_chi6_o1 is omega^1, not omega^(i+j), so a_l differs from l^i + l^j at a positive density of primes (Chebotarev, Brauer–Nesbitt)"), lines);
+    }
 }

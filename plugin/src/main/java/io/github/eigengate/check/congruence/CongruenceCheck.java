@@ -83,10 +83,14 @@ public final class CongruenceCheck implements Check {
             Subject subject = new Subject("congruence", f.id() + "~" + g.id(), "p=" + p + (j != 0 ? " j=" + j : ""));
             List<Plan> plans = List.of();
             String problem = null;
+            boolean withCharacter = !f.character().isTrivial() || !g.character().isTrivial();
             if (f.weight() < 2 || g.weight() < 2) {
                 problem = "weight 1 is not supported: the bound needs k >= 2 on both sides";
+            } else if (withCharacter && (problem = characterProblem(f, g, p)) != null) {
+                plans = List.of();
             } else if (CongruenceBounds.determinantsMatch(p, f.weight(), g.weight(), j)) {
-                plans = CongruenceBounds.forForms(p, f.weight(), f.level(), g.weight(), g.level(), j);
+                plans = CongruenceBounds.forForms(p, f.weight(), depletionLevel(f, p), g.weight(),
+                        depletionLevel(g, p), j);
                 if (plans.isEmpty()) {
                     problem = "no Sturm-type bound is implemented for p = 3 with an odd twist (θ needs p >= 5 here)";
                 }
@@ -98,6 +102,50 @@ public final class CongruenceCheck implements Check {
                 need(g, p, limit);
             }
             return c;
+        }
+
+        /**
+         * Why a claim between forms with characters cannot be certified, or null when it can: the Sturm-type bound
+         * is applied to θ^s f♭ − θ^t g♭ in M_W(Γ0(M), χ), which needs one character χ on both sides (χ_f = χ_g
+         * after lifting to lcm(N_f, N_g)), p ∤ N_f N_g, and p ∤ ord χ (so that reduction mod 𝔓 is injective on the
+         * values and the identification of residue fields decides which embedding makes ζ_f = ζ_g).
+         */
+        private static String characterProblem(Form f, Form g, long p) {
+            if (f.level() % p == 0 || g.level() % p == 0) {
+                return "forms with a nontrivial character and p | N are not certified (the character's p-part mixes"
+                        + " with ω; see docs/congruences.md)";
+            }
+            int lcm = (int) (f.level() / gcd(f.level(), g.level()) * (long) g.level());
+            if (lcm > io.github.eigengate.arith.DirichletCharacter.MAX_MODULUS
+                    || !f.character().lift(lcm).equals(g.character().lift(lcm))) {
+                return "the characters of the two forms differ (" + f.character().cell() + " mod " + f.level()
+                        + ", " + g.character().cell() + " mod " + g.level() + "): the Sturm-type bound is"
+                        + " implemented for one common character only";
+            }
+            if (f.character().order() % p == 0) {
+                return "p divides the order of the character; the bound is implemented for p prime to it";
+            }
+            return null;
+        }
+
+        /**
+         * The level to deplete from: N, times q for each q ≠ p with q² | N whose a_q need not vanish (the q-part of
+         * cond χ equals that of N, Li 1975, Thm 3(iii)); then h − a_q h|V_q has level Nq.
+         */
+        private static int depletionLevel(Form h, long p) {
+            long n = h.level();
+            for (long[] qe : io.github.eigengate.theory.Arith.factor(h.level())) {
+                long q = qe[0];
+                if (q != p && qe[1] >= 2 && h.character().conductorPart((int) q)
+                        == io.github.eigengate.theory.Arith.powExact(q, (int) qe[1])) {
+                    n *= q;
+                }
+            }
+            return (int) Math.min(n, Integer.MAX_VALUE);
+        }
+
+        private static long gcd(long a, long b) {
+            return b == 0 ? a : gcd(b, a % b);
         }
 
         @Override
@@ -151,6 +199,14 @@ public final class CongruenceCheck implements Check {
                     }
                     matches.addAll(compare(sf, kf, sg, kg, jr, top, excluded));
                 }
+            }
+            if (matches.isEmpty()) {
+                out.error(ID, c.row.at(), c.subject, "an identification of residue fields with zeta_" + f.id()
+                                + " = zeta_" + g.id(), "none at the primes above " + p,
+                        "the congruence is false: under every choice of primes above " + p + " the reductions of χ_f"
+                                + " and χ_g differ, so det ρ̄_f = (χ_f mod 𝔭)ω^(k_f-1) is not det(ρ̄_g ⊗ ω^j) = (χ_g mod "
+                                + "𝔭)ω^(k_g-1+2j) (Chebotarev, Brauer–Nesbitt)");
+                return;
             }
             Match best = null;
             Plan plan = null;
@@ -286,6 +342,9 @@ public final class CongruenceCheck implements Check {
                 String ident = l == 1 ? "" : "the residue fields identified inside F_" + p + "[x]/(" + big.modulus()
                         + ") by x_" + sf.form.id() + " -> " + alpha + ", x_" + sg.form.id() + " -> " + beta;
                 Match m = new Match(pf, kf, pg, kg, alpha, beta, ident);
+                if (!zetasAgree(sf, pf, alpha, sg, pg, beta, big)) {
+                    continue; // another embedding: there χ_f ≠ χ_g, so det ρ̄_f ≠ det ρ̄_g ⊗ ω^{2j}
+                }
                 int n = Math.min(sf.ells.length, sg.ells.length);
                 boolean fast = l == 1 && sf.linear(kf) && sg.linear(kg);
                 for (int idx = 0; idx < n; idx++) {
@@ -322,6 +381,22 @@ public final class CongruenceCheck implements Check {
                 out.add(m);
             }
             return out;
+        }
+
+        /** Whether the identification maps ζ_f mod 𝔭_f to ζ_g mod 𝔭_g (trivially so without a zeta). */
+        private static boolean zetasAgree(Residues.Store sf, Residues.PrimeAbove pf, FiniteField.Element alpha,
+                                          Residues.Store sg, Residues.PrimeAbove pg, FiniteField.Element beta,
+                                          FiniteField big) {
+            if (sf.form.zeta() == null || sg.form.zeta() == null) {
+                return true;
+            }
+            try {
+                FiniteField.Element zf = Residues.reduce(sf.form.zeta(), pf.field());
+                FiniteField.Element zg = Residues.reduce(sg.form.zeta(), pg.field());
+                return big.evaluate(zf.value(), alpha).equals(big.evaluate(zg.value(), beta));
+            } catch (ArithmeticException e) {
+                return false;
+            }
         }
 
         private static int gcd(int a, int b) {

@@ -6,7 +6,9 @@ import io.github.eigengate.check.Certificate;
 import io.github.eigengate.check.Check;
 import io.github.eigengate.check.FindingSink;
 import io.github.eigengate.check.Subject;
+import io.github.eigengate.arith.DirichletCharacter;
 import io.github.eigengate.data.Catalog;
+import io.github.eigengate.data.CharacterCell;
 import io.github.eigengate.data.Form;
 import io.github.eigengate.data.TableRow;
 import io.github.eigengate.theory.congruence.CongruenceBounds;
@@ -78,11 +80,29 @@ public final class ReducibleCheck implements Check {
             if (prime == BAD) {
                 return null;
             }
+            DirichletCharacter psi = characterCell(row, "psi", label, f);
+            DirichletCharacter phi = characterCell(row, "phi", label, f);
+            if (psi == null || phi == null) {
+                return null;
+            }
             Subject subject = new Subject("reducible", f.id(), "p=" + p + " i=" + i + " j=" + j);
             List<Plan> plans = List.of();
             String problem = null;
+            boolean withCharacter = !f.character().isTrivial() || !psi.isTrivial() || !phi.isTrivial();
             if (f.weight() < 2) {
                 problem = "weight 1 is not supported: the bound needs k >= 2";
+            } else if (withCharacter) {
+                DirichletCharacter ratio = psi.multiply(phi).multiply(f.character().conjugate());
+                boolean coprime = f.level() % p != 0;
+                if (coprime && !CongruenceBounds.eisensteinDeterminantMatches(p, f.weight(), i, j)) {
+                    problem = null; // the weights alone already contradict the determinant: reported as false
+                } else if (coprime && !ratio.isTrivial() && ratio.order() % p != 0) {
+                    characterMismatch.put(row, "ψφ = " + psi.multiply(phi).cell() + ", χ_f = "
+                            + f.character().cell());
+                } else {
+                    problem = "the Sturm-type bound for an Eisenstein series with characters ψ, φ is not implemented"
+                            + " (see docs/congruences.md)";
+                }
             } else if (CongruenceBounds.eisensteinDeterminantMatches(p, f.weight(), i, j)) {
                 plans = CongruenceBounds.forEisenstein(p, f.weight(), f.level(), i, j);
                 if (plans.isEmpty()) {
@@ -97,6 +117,31 @@ public final class ReducibleCheck implements Check {
             return new Claim(row, f, p, i, j, prime, subject, plans, problem);
         }
 
+        /** Rows whose ψφ is not the form's character, with the reason. */
+        private final java.util.Map<TableRow, String> characterMismatch = new java.util.HashMap<>();
+
+        /**
+         * A {@code psi}/{@code phi} cell: a character mod the form's level N in the character-cell syntax (empty =
+         * trivial); the Eisenstein series E(ψ, φ) has level cond ψ · cond φ, which must divide N. Null after
+         * reporting.
+         */
+        private DirichletCharacter characterCell(TableRow row, String column, String label, Form f) {
+            CharacterCell.Parsed parsed = CharacterCell.parse(row.get(column), f.level());
+            if (!parsed.ok()) {
+                cellError(row, column, label, CharacterCell.EXPECTED + " (a character mod N = " + f.level() + ")",
+                        row.get(column), parsed.problem());
+                return null;
+            }
+            DirichletCharacter c = parsed.character();
+            if (!c.isTrivial() && c.order() > 2 && (f.character().order() % c.order() != 0)) {
+                cellError(row, column, label, "a character whose order divides that of χ_f ("
+                                + f.character().order() + "), so its values lie in the form's field",
+                        row.get(column), "its order is " + c.order());
+                return null;
+            }
+            return c;
+        }
+
         @Override
         void evaluate(FindingSink out) {
             for (Claim c : claims) {
@@ -109,6 +154,13 @@ public final class ReducibleCheck implements Check {
             Form f = c.f;
             long p = c.p;
             String claimText = "a_l(" + f.id() + ") = l^" + c.i + " + l^" + c.j + " mod a prime above " + p;
+            String mismatch = characterMismatch.get(c.row);
+            if (mismatch != null) {
+                out.error(ID, c.row.at(), c.subject, "ψφ = χ_f", mismatch,
+                        "the claim is false: ρ̄_f^ss ≅ ψω^i ⊕ φω^j gives det ρ̄_f = ψφω^(i+j), while det ρ̄_f = (χ_f mod"
+                                + " 𝔭)ω^(k-1); p ∤ N and p ∤ ord(ψφχ̄_f), so ψφ ≠ χ_f stays different mod 𝔭");
+                return;
+            }
             if (c.problem != null) {
                 notCertified(out, ID, c.row, c.subject, "a certifiable congruence", claimText,
                         "not certified: " + c.problem);
