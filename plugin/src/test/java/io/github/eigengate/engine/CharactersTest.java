@@ -185,4 +185,27 @@ class CharactersTest {
                 "data/reducible.csv:3: error [reducible] reducible=lev13_wt2_chi6_o1 p=7 i=0 j=1: expected a certifiable congruence, found a_l(lev13_wt2_chi6_o1) = l^0 + l^1 mod a prime above 7; not certified: the Sturm-type bound for an Eisenstein series with characters ψ, φ is not implemented (see docs/congruences.md)",
                 "data/reducible.csv:4: error [reducible] reducible=lev13_wt2_chi6_o1 p=7 i=0 j=0: expected k - 1 = i + j mod 6, found k=2, i=0, j=0; the claim is false: det of the mod-p representation of lev13_wt2_chi6_o1 is omega^1, not omega^(i+j), so a_l differs from l^i + l^j at a positive density of primes (Chebotarev, Brauer–Nesbitt)"), lines);
     }
+
+    /**
+     * Serre weights of forms with a character at p ∤ N: the character is unramified at p, so ρ̄|I_p is the same as
+     * with the trivial character and k(ρ̄) follows the same recipe (Serre 1987, §2; Edixhoven 1992, Thm 2.5, 2.6).
+     * lev7_wt3_chi2_o1 has a_5 = 0 (PARI; 5 is inert in Q(√−7)): ρ̄|I_5 ≅ ω₂^2 ⊕ ω₂^10, k(ρ̄) = 1 + 2 = 3, so the
+     * claim 5 fails; lev13_wt2_chi6_o1 has a_7 = 0 (supersingular, k(ρ̄) = 2) and is ordinary at 5 (k(ρ̄) = 2).
+     */
+    @Test
+    void serreWeightsOfFormsWithACharacter() throws IOException {
+        assertEquals(List.of(), weightFindings(String.join("\n", "form,p,prime,local,serre_weight",
+                "lev7_wt3_chi2_o1,5,,,3",
+                "lev13_wt2_chi6_o1,7,x + 4,,2",
+                "lev13_wt2_chi6_o1,5,x^2 + 4*x + 1,nonsplit,2", "")));
+        assertEquals(List.of("data/modp-weights.csv:2:3: error [serre-weight] form=lev7_wt3_chi2_o1 p=5: expected 3, found 5; Serre's weight of ρ̄ with ρ̄|I_5 ≅ ω₂^2 ⊕ ω₂^10 [a_5 ≡ 0 mod 5: supersingular (Fontaine)] (Serre 1987, §2)"),
+                weightFindings("form,p,serre_weight\nlev7_wt3_chi2_o1,5,5\n"));
+    }
+
+    private List<String> weightFindings(String table) throws IOException {
+        Path src = Fixture.dataset("characters");
+        Datasets.write(dir, "forms.csv", Files.readString(src.resolve("forms.csv")), "coefficients.csv",
+                Files.readString(src.resolve("coefficients.csv")), "modp-weights.csv", table);
+        return Datasets.lines(Datasets.run(dir)).stream().filter(l -> l.contains("modp-weights")).toList();
+    }
 }
