@@ -192,3 +192,76 @@ project('weight-set-missing-weight',
         {'data/forms.csv': FORMS2, 'data/coefficients.csv': coeffs2(),
          'data/modp-weights.csv': 'form,p,serre_weight,weights\nf11,19,2,"(0,0)"\n'},
         ['[ERROR] data/modp-weights.csv:2:4: error [weight-set] form=f11 p=19: expected (0,0);(18,0), found (0,0); missing (18,0);'])
+
+# ---- forms with a nontrivial character (issue: nebentypus) ----
+# Values are taken from the committed PARI/GP fixture plugin/src/test/resources/datasets/characters/ (written by
+# fixtures-gp/characters.gp: mfeigenbasis(mfinit([N,k,[znstar(N,1),chi]],0)), field = absolute field of Q(chi)(a_n),
+# zeta = image of PARI's t), a_n for n <= 30.
+CHAR_DIR = pathlib.Path(__file__).resolve().parent.parent.parent / 'plugin/src/test/resources/datasets/characters'
+CHAR_FORMS = ['lev13_wt2_chi6_o1', 'lev21_wt2_chi6_o1', 'lev13_wt3_chi4_o1', 'lev7_wt3_chi2_o1', 'lev23_wt1_chi2_o1']
+CHAR_N = 30
+def char_rows():
+    forms = {}
+    for line in open(CHAR_DIR / 'forms.csv'):
+        if line.startswith('#') or line.startswith('id,'): continue
+        forms[line.split(',')[0]] = line.rstrip('\n')
+    coeffs = {}
+    for line in open(CHAR_DIR / 'coefficients.csv'):
+        if line.startswith('#') or line.startswith('form,'): continue
+        f, n, v = line.rstrip('\n').split(',', 2)
+        coeffs.setdefault(f, {})[int(n)] = v
+    return forms, coeffs
+CHAR_SRC = ('# forms with a character, from plugin/src/test/resources/datasets/characters (PARI/GP 2.15.2, fixtures-gp/characters.gp):\n'
+            '#   mfeigenbasis(mfinit([N,k,[znstar(N,1),chi]],0)); character G.gen[j]:chi[j]/G.cyc[j]; zeta = image of PARI\'s t\n')
+def char_files(plant=None, forms_text=None):
+    forms, coeffs = char_rows()
+    ft = forms_text if forms_text is not None else CHAR_SRC + 'id,level,weight,character,field,zeta\n' + ''.join(forms[f] + '\n' for f in CHAR_FORMS)
+    c = CHAR_SRC + 'form,n,value\n'
+    lines = {}
+    ln = c.count('\n')
+    for f in CHAR_FORMS:
+        for n in range(1, CHAR_N + 1):
+            v = (plant or {}).get((f, n), coeffs[f][n])
+            c += '%s,%d,%s\n' % (f, n, v)
+            ln += 1
+            lines[(f, n)] = ln
+    return {'data/forms.csv': ft, 'data/coefficients.csv': c}, lines
+files, _ = char_files()
+project('character-dataset-passes',
+        'Forms with characters of order 6 (one and two generators), 4 (a CM quartic field), 2 in odd weight 3 and in weight 1 pass every check.',
+        files, ['[INFO] eigengate: 0 errors, 0 warnings, 0 notes in 1 dataset (5 forms, 150 coefficient rows'], fail=False)
+# lev13_wt2_chi6_o1: a_3 = 2*x - 2 replaced by its complex conjugate chi-bar(3)*a_3 = -2*x (chi(3) = -x)
+files, lines = char_files({('lev13_wt2_chi6_o1', 3): '-2*x'})
+project('character-conjugate-coefficient-fails',
+        'An a_p replaced by its complex conjugate breaks conj(a_p) = chi-bar(p)a_p, which ramanujan-bound decides exactly.',
+        files, ['[ERROR] data/coefficients.csv:%d: error [ramanujan-bound] form=lev13_wt2_chi6_o1 n=3: expected every embedding with χ̄(p)*a_p^2 real in [0, 4*p^(k-1)] = [0, 12], found a_p = -2*x, χ(p) = -x, χ̄(p)*a_p^2 with characteristic polynomial x^2 + 4*x + 16; χ̄(p)*a_p^2 is not real and >= 0 in every embedding, so conj(a_p) = χ̄(p)*a_p fails at p=3 (is a_p replaced by its complex conjugate, or χ(p) wrong?)' % lines[('lev13_wt2_chi6_o1', 3)]])
+# lev13_wt2_chi6_o1: a_4 written with chi-bar(2) = 1 - x instead of chi(2) = x: a_2^2 - (1 - x)*2 = 5*x - 2 (true a_4 = x)
+files, lines = char_files({('lev13_wt2_chi6_o1', 4): '5*x - 2'})
+project('character-wrong-value-in-prime-square-fails',
+        'A coefficient a_{p^2} computed with the wrong chi(p) fails the Hecke recursion with the character.',
+        files, ['[ERROR] data/coefficients.csv:%d: error [hecke-relations] form=lev13_wt2_chi6_o1 n=4: expected x, found 5*x - 2; ' % lines[('lev13_wt2_chi6_o1', 4)]])
+# lev13_wt3_chi4_o1: a_2 times the totally real unit 3 + sqrt(10) (gp: see CharactersTest): |a_2|^2 = 25.65 > 16 in one
+# pair of embeddings of the CM field, 0.35 in the other
+files, lines = char_files({('lev13_wt3_chi4_o1', 2): '2/21*x^3 + 5/21*x^2 - 5/7*x + 17/21'})
+project('character-ramanujan-one-embedding-fails',
+        'A Ramanujan-Petersson violation that shows in one pair of complex embeddings of a CM quartic field only.',
+        files, ['[ERROR] data/coefficients.csv:%d: error [ramanujan-bound] form=lev13_wt3_chi4_o1 n=2: expected every embedding with χ̄(p)*a_p^2 real in [0, 4*p^(k-1)] = [0, 16], found a_p = 2/21*x^3 + 5/21*x^2 - 5/7*x + 17/21, χ(p) = ' % lines[('lev13_wt3_chi4_o1', 2)],
+                '; Deligne\'s bound |a_p| <= 2 p^((k-1)/2) fails in some complex embedding at p=2'])
+MALFORMED = ('id,level,weight,character,field,zeta\n'
+             'notgen,13,2,4:1/6,x^2 - x + 1,x\n'
+             'inconsistent,13,2,2:1/6;4:1/6,x^2 - x + 1,x\n'
+             'order,13,2,2:1/5,x^2 - x + 1,x\n'
+             'nozeta,13,2,2:2/12,x^2 - x + 1,\n'
+             'smallzeta,13,2,2:2/12,x^2 - x + 1,x - 1\n'
+             'parity,7,2,3:1/2,,\n'
+             'nonunit,21,2,3:1/2;2:1/6,x^2 - x + 1,x\n')
+project('character-cell-malformed-fails',
+        'Each malformed character or zeta cell is a table-format error with file, line, column and what was expected.',
+        {'data/forms.csv': MALFORMED},
+        ['[ERROR] data/forms.csv:2:4: error [table-format] form=notgen: expected empty, 1, or g:a/b pairs joined by \';\' with units 1 < g < N that generate (Z/NZ)^×, found 4:1/6; the generators do not generate (Z/13Z)^×: they reach 6 of its 12 elements',
+         '[ERROR] data/forms.csv:3:4: error [table-format] form=inconsistent: expected empty, 1, or g:a/b pairs joined by \';\' with units 1 < g < N that generate (Z/NZ)^×, found 2:1/6;4:1/6; the values are not those of a character',
+         '[ERROR] data/forms.csv:4:4: error [table-format] form=order: expected empty, 1, or g:a/b pairs joined by \';\' with units 1 < g < N that generate (Z/NZ)^×, found 2:1/5; χ(2) = exp(2πi·1/5) has order 5, which does not divide the order 12 of 2 mod 13',
+         '[ERROR] data/forms.csv:5:6: error [table-format] form=nozeta: expected a root of unity of order 6 in the coefficient field (Φ_6(zeta) = 0), found an empty cell; the cell is empty',
+         '[ERROR] data/forms.csv:6:6: error [table-format] form=smallzeta: expected a root of unity of order 6 in the coefficient field (Φ_6(zeta) = 0), found x - 1; Φ_6(zeta) = -2*x + 2 ≠ 0',
+         '[ERROR] data/forms.csv:7:3: error [table-format] form=parity: expected an odd weight, found 2; S_k(N, χ) = 0: χ(−1) = −1 but (−1)^k = 1',
+         '[ERROR] data/forms.csv:8:4: error [table-format] form=nonunit: expected empty, 1, or g:a/b pairs joined by \';\' with units 1 < g < N that generate (Z/NZ)^×, found 3:1/2;2:1/6; 3 is not a unit g with 1 < g < 21'])
