@@ -146,5 +146,54 @@ public final class GateBench {
                 System.out.printf("Ramanujan–Petersson, degree 20 (charpoly + Sturm): %,.0f checks/s%n", checks / s);
             }
         }
+        ramanujanWithCharacter();
+    }
+
+    /**
+     * The same with a character, on the degree-20 CM orbit of S_2(67, χ), χ of order 11 (datasets/bigcharacter,
+     * PARI/GP): each check forms b = χ̄(p)a_p², its characteristic polynomial and one Sturm count on [0, 4p^{k−1}].
+     */
+    private static void ramanujanWithCharacter() {
+        String id = "lev67_wt2_chi11_o3";
+        Fixture big = Fixture.of("datasets/bigcharacter/coefficients.csv");
+        String[] row = null;
+        try {
+            for (String l : Files.readAllLines(Fixture.dataset("bigcharacter").resolve("forms.csv"))) {
+                if (l.startsWith(id + ",")) {
+                    row = l.split(",", -1);
+                }
+            }
+        } catch (IOException e) {
+            throw new IllegalStateException(e);
+        }
+        NumberField k = NumberField.of(QPoly.parse(row[4]));
+        NumberField.Element zeta = k.element(QPoly.parse(row[5]));
+        io.github.eigengate.arith.DirichletCharacter chi = io.github.eigengate.data.CharacterCell
+                .parse(row[3], 67).character();
+        int[] primes = {2, 3, 5, 7, 11, 13, 17, 19, 23, 29, 31, 37, 41, 43, 47, 53, 59, 61, 71, 73, 79, 83, 89, 97};
+        List<NumberField.Element> aps = new ArrayList<>();
+        List<NumberField.Element> chis = new ArrayList<>();
+        for (int p : primes) {
+            aps.add(k.element(QPoly.parse(big.valueOf(id, p))));
+            chis.add(chi.conjugate().value(p, k, zeta)); // χ̄(p), looked up from ζ-powers in the check
+        }
+        for (int round = 0; round < 2; round++) {
+            long t0 = System.nanoTime();
+            int checks = 0;
+            while (System.nanoTime() - t0 < 2_000_000_000L) {
+                for (int i = 0; i < primes.length; i++) {
+                    NumberField.Element fresh = k.element(aps.get(i).asPolynomial()); // no cached charpoly
+                    if (!RamanujanBoundProbe.holdsWithCharacter(fresh, chis.get(i), primes[i], 2)) {
+                        throw new IllegalStateException("real a_p beyond the bound at p=" + primes[i]);
+                    }
+                    checks++;
+                }
+            }
+            double s = (System.nanoTime() - t0) / 1e9;
+            if (round == 1) {
+                System.out.printf("Ramanujan–Petersson with a character, degree-20 CM field (χ̄(p)a_p², charpoly + "
+                        + "Sturm): %,.0f checks/s%n", checks / s);
+            }
+        }
     }
 }

@@ -14,7 +14,7 @@ import org.junit.jupiter.params.provider.ValueSource;
 class RealDatasetsTest {
 
     @ParameterizedTest
-    @ValueSource(strings = {"level1", "weight2", "higherlevel", "bigfields", "modp", "characters"})
+    @ValueSource(strings = {"level1", "weight2", "higherlevel", "bigfields", "modp", "characters", "bigcharacter"})
     void realDataPassEveryCheck(String name) {
         Report r = new Gate(Settings.defaults()).run(List.of(new Gate.Dataset(Fixture.dataset(name), name)));
         assertEquals(List.of(), Datasets.errors(r));

@@ -1,5 +1,6 @@
 package io.github.eigengate.check.form;
 
+import io.github.eigengate.arith.DirichletCharacter;
 import io.github.eigengate.arith.Field;
 import io.github.eigengate.arith.QPoly;
 import io.github.eigengate.arith.Rational;
@@ -13,6 +14,8 @@ import io.github.eigengate.data.Coefficients;
 import io.github.eigengate.data.FormData;
 import io.github.eigengate.theory.Arith;
 import java.math.BigInteger;
+import java.util.ArrayList;
+import java.util.List;
 
 /**
  * The Ramanujan–Petersson bound: for a newform of weight k and trivial character and a prime p ∤ N, every complex
@@ -88,14 +91,18 @@ public final class RamanujanBound implements FormCheck {
         int level = data.form().level();
         int k = data.form().weight();
         int[] spf = Arith.sharedSmallestPrimeFactors(a.maxIndex());
+        DirichletCharacter character = data.form().character();
+        List<E> zetaPowers = powers(data.zeta(), character.order(), field);
         for (int p : a.indices()) {
             if (p < 2 || Arith.smallestPrimeFactor(p, spf) != p || level % p == 0) {
                 continue;
             }
             E ap = a.get(p);
             BigInteger bound = BigInteger.valueOf(p).pow(k - 1).shiftLeft(2); // 4 p^{k-1}
-            E chi = data.chi(p);
-            E b = field.multiply(field.inverse(chi), field.multiply(ap, ap)); // χ̄(p) = χ(p)^{−1}
+            int e = character.exponent(p);
+            int m = character.order();
+            E chi = zetaPowers.get(e);
+            E b = field.multiply(zetaPowers.get((m - e) % m), field.multiply(ap, ap)); // χ̄(p) = ζ^{m−e}
             Subject subject = Subject.form(data.form().id(), "n=" + p);
             String expected = "every embedding with χ̄(p)*a_p^2 real in [0, 4*p^(k-1)] = [0, " + bound + "]";
             String bad;
@@ -109,13 +116,30 @@ public final class RamanujanBound implements FormCheck {
                 continue;
             }
             QPoly poly = Values.charPoly(b);
-            if (RealRoots.allRootsRealIn(poly, Rational.ZERO, Rational.of(bound))) {
+            if (withinBoundWithCharacter(poly, bound)) {
                 continue;
             }
             bad = RealRoots.allRootsRealIn(poly, Rational.ZERO, rootBound(poly)) ? "large" : "not real";
             out.error(ID, a.at(p), subject, expected, "a_p = " + ap + ", χ(p) = " + chi
                     + ", χ̄(p)*a_p^2 with characteristic polynomial " + poly, reason(bad, k, p));
         }
+    }
+
+    /** Whether every root of the characteristic polynomial of χ̄(p)a_p² is real in [0, bound] (one Sturm count). */
+    static boolean withinBoundWithCharacter(QPoly charPolyOfB, BigInteger bound) {
+        return RealRoots.allRootsRealIn(charPolyOfB, Rational.ZERO, Rational.of(bound));
+    }
+
+    /** ζ^0, …, ζ^{m−1} (for m ≤ 2: 1, −1), so that χ(p) and χ̄(p) are looked up, not inverted. */
+    private static <E> List<E> powers(E zeta, int m, Field<E> field) {
+        List<E> out = new ArrayList<>(m);
+        E z = m <= 2 ? field.negate(field.one()) : zeta;
+        E x = field.one();
+        for (int i = 0; i < m; i++) {
+            out.add(x);
+            x = field.multiply(x, z);
+        }
+        return out;
     }
 
     private static String reason(String bad, int k, int p) {
