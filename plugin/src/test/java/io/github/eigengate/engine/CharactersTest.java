@@ -162,8 +162,8 @@ class CharactersTest {
 
     /**
      * Eisenstein rows with characters ψ, φ (columns psi, phi) for lev13_wt2_chi6_o1 (χ = 2:2/12 of order 6) mod 7:
-     * ψφ = 1 ≠ χ is false (7 ∤ 13·6); ψ = χ, φ = 1 meets the determinant and is not certified (no bound with
-     * characters); k − 1 = 1 ≢ i + j = 0 mod 6 is false; a malformed ψ and one of order 4 are table-format errors.
+     * ψφ = 1 ≠ χ is false (7 ∤ 13·6); ψ = χ, φ = 1 meets the determinant but fails at ℓ = 2 (PARI a_2 = -x - 1 ≡ 3
+     * mod (7, x + 4), while χ(2) + 2 = x + 2 ≡ 5); k − 1 = 1 ≢ i + j = 0 mod 6 is false; a malformed ψ and one of order 4 are table-format errors.
      */
     @Test
     void eisensteinRowsWithCharacters() throws IOException {
@@ -182,7 +182,7 @@ class CharactersTest {
                 "data/reducible.csv:5:6: error [table-format] reducible=lev13_wt2_chi6_o1 p=7: expected empty, 1, or g:a/b pairs joined by ';' with units 1 < g < N that generate (Z/NZ)^× (a character mod N = 13), found 4:1/6; the generators do not generate (Z/13Z)^×: they reach 6 of its 12 elements",
                 "data/reducible.csv:6:6: error [table-format] reducible=lev13_wt2_chi6_o1 p=7: expected a character whose order divides that of χ_f (6), so its values lie in the form's field, found 2:1/4; its order is 4",
                 "data/reducible.csv:2: error [reducible] reducible=lev13_wt2_chi6_o1 p=7 i=0 j=1: expected ψφ = χ_f, found ψφ = 1, χ_f = 2:1/6; the claim is false: ρ̄_f^ss ≅ ψω^i ⊕ φω^j gives det ρ̄_f = ψφω^(i+j), while det ρ̄_f = (χ_f mod 𝔭)ω^(k-1); p ∤ N and p ∤ ord(ψφχ̄_f), so ψφ ≠ χ_f stays different mod 𝔭",
-                "data/reducible.csv:3: error [reducible] reducible=lev13_wt2_chi6_o1 p=7 i=0 j=1: expected a certifiable congruence, found a_l(lev13_wt2_chi6_o1) = l^0 + l^1 mod a prime above 7; not certified: the Sturm-type bound for an Eisenstein series with characters ψ, φ is not implemented (see docs/congruences.md)",
+                "data/reducible.csv:3: error [reducible] reducible=lev13_wt2_chi6_o1 p=7 i=0 j=1: expected a_2(lev13_wt2_chi6_o1) = ψ(2)*2^0 + φ(2)*2^1 = 5 mod (7, x + 4), found a_2(lev13_wt2_chi6_o1) = 3; the congruence fails at l = 2, the first prime l not dividing 91 where the residues differ",
                 "data/reducible.csv:4: error [reducible] reducible=lev13_wt2_chi6_o1 p=7 i=0 j=0: expected k - 1 = i + j mod 6, found k=2, i=0, j=0; the claim is false: det of the mod-p representation of lev13_wt2_chi6_o1 is omega^1, not omega^(i+j), so a_l differs from l^i + l^j at a positive density of primes (Chebotarev, Brauer–Nesbitt)"), lines);
     }
 
@@ -207,5 +207,30 @@ class CharactersTest {
         Datasets.write(dir, "forms.csv", Files.readString(src.resolve("forms.csv")), "coefficients.csv",
                 Files.readString(src.resolve("coefficients.csv")), "modp-weights.csv", table);
         return Datasets.lines(Datasets.run(dir)).stream().filter(l -> l.contains("modp-weights")).toList();
+    }
+
+    /**
+     * Dihedral weight-1 forms are Eisenstein mod 3 with characters: the S3-representation of lev23_wt1_chi2_o1 reduces
+     * mod 3 to 1 ⊕ χ, a_ℓ ≡ 1 + χ(ℓ) (PARI/GP: f23 = mfcoefs(mfeigenbasis(mfinit([23,1,[znstar(23,1),[11]]],0))[1],
+     * 150); [l | l <- primes(35), l != 3 && l != 23 && (f23[l+1] - 1 - kronecker(-23, l)) % 3] is empty). The row
+     * holds for every ℓ in the tables and is not certified (no bound with characters); the same claim mod 5 for
+     * lev31_wt1_chi2_o1 fails first at ℓ = 2 (a_2 = -1, 1 + χ(2) = 2; same gp command with 31 and 5); ψφ = 1 ≠ χ is
+     * false from the determinant alone.
+     */
+    @Test
+    void weightOneEisensteinRowsWithCharacters() throws IOException {
+        Path src = Fixture.dataset("characters");
+        Datasets.write(dir, "forms.csv", Files.readString(src.resolve("forms.csv")), "coefficients.csv",
+                Files.readString(src.resolve("coefficients.csv")), "reducible.csv", String.join("\n",
+                        "form,p,i,j,prime,psi,phi",
+                        "lev23_wt1_chi2_o1,3,0,0,,,5:11/22",
+                        "lev31_wt1_chi2_o1,5,0,0,,,3:15/30",
+                        "lev23_wt1_chi2_o1,3,0,0,,,", ""));
+        List<String> lines = Datasets.lines(Datasets.run(dir)).stream().filter(l -> l.contains("reducible.csv"))
+                .toList();
+        assertEquals(List.of(
+                "data/reducible.csv:2: error [reducible] reducible=lev23_wt1_chi2_o1 p=3 i=0 j=0: expected a certifiable congruence, found a_l(lev23_wt1_chi2_o1) = ψ(l)*l^0 + φ(l)*l^0 mod a prime above 3 (ψ = 1, φ = 5:1/2); not certified: the Sturm-type bound for an Eisenstein series with characters ψ, φ is not implemented (see docs/congruences.md)",
+                "data/reducible.csv:3: error [reducible] reducible=lev31_wt1_chi2_o1 p=5 i=0 j=0: expected a_2(lev31_wt1_chi2_o1) = ψ(2)*2^0 + φ(2)*2^0 = 2 mod (5, x), found a_2(lev31_wt1_chi2_o1) = 4; the congruence fails at l = 2, the first prime l not dividing 155 where the residues differ",
+                "data/reducible.csv:4: error [reducible] reducible=lev23_wt1_chi2_o1 p=3 i=0 j=0: expected ψφ = χ_f, found ψφ = 1, χ_f = 5:1/2; the claim is false: ρ̄_f^ss ≅ ψω^i ⊕ φω^j gives det ρ̄_f = ψφω^(i+j), while det ρ̄_f = (χ_f mod 𝔭)ω^(k-1); p ∤ N and p ∤ ord(ψφχ̄_f), so ψφ ≠ χ_f stays different mod 𝔭"), lines);
     }
 }

@@ -1,12 +1,12 @@
 package io.github.eigengate.check.congruence;
 
+import io.github.eigengate.arith.DirichletCharacter;
 import io.github.eigengate.arith.FiniteField;
 import io.github.eigengate.arith.FpPoly;
 import io.github.eigengate.check.Certificate;
 import io.github.eigengate.check.Check;
 import io.github.eigengate.check.FindingSink;
 import io.github.eigengate.check.Subject;
-import io.github.eigengate.arith.DirichletCharacter;
 import io.github.eigengate.data.Catalog;
 import io.github.eigengate.data.CharacterCell;
 import io.github.eigengate.data.Form;
@@ -89,9 +89,7 @@ public final class ReducibleCheck implements Check {
             List<Plan> plans = List.of();
             String problem = null;
             boolean withCharacter = !f.character().isTrivial() || !psi.isTrivial() || !phi.isTrivial();
-            if (f.weight() < 2) {
-                problem = "weight 1 is not supported: the bound needs k >= 2";
-            } else if (withCharacter) {
+            if (withCharacter) {
                 DirichletCharacter ratio = psi.multiply(phi).multiply(f.character().conjugate());
                 boolean coprime = f.level() % p != 0;
                 if (coprime && !CongruenceBounds.eisensteinDeterminantMatches(p, f.weight(), i, j)) {
@@ -102,7 +100,11 @@ public final class ReducibleCheck implements Check {
                 } else {
                     problem = "the Sturm-type bound for an Eisenstein series with characters ψ, φ is not implemented"
                             + " (see docs/congruences.md)";
+                    withCharacters.put(row, new DirichletCharacter[] {psi, phi});
+                    need(f, p, Primes.CAP);
                 }
+            } else if (f.weight() < 2) {
+                problem = "weight 1 is not supported: the bound needs k >= 2";
             } else if (CongruenceBounds.eisensteinDeterminantMatches(p, f.weight(), i, j)) {
                 plans = CongruenceBounds.forEisenstein(p, f.weight(), f.level(), i, j);
                 if (plans.isEmpty()) {
@@ -116,6 +118,9 @@ public final class ReducibleCheck implements Check {
             }
             return new Claim(row, f, p, i, j, prime, subject, plans, problem);
         }
+
+        /** Rows with characters whose determinant fits: compared at the primes in the tables, never certified. */
+        private final java.util.Map<TableRow, DirichletCharacter[]> withCharacters = new java.util.HashMap<>();
 
         /** Rows whose ψφ is not the form's character, with the reason. */
         private final java.util.Map<TableRow, String> characterMismatch = new java.util.HashMap<>();
@@ -142,6 +147,94 @@ public final class ReducibleCheck implements Check {
             return c;
         }
 
+        /**
+         * a_ℓ ≡ ψ(ℓ)ℓ^i + φ(ℓ)ℓ^j mod 𝔭 at every prime ℓ ∤ pN in the tables, ψ(ℓ), φ(ℓ) reduced through the form's
+         * zeta. Reports and returns true when it fails at every admissible prime above p (the claim is false).
+         */
+        private boolean compareWithCharacters(Claim c, DirichletCharacter psi, DirichletCharacter phi,
+                                              FindingSink out) {
+            Form f = c.f;
+            long p = c.p;
+            Residues.Store s = store(f, p);
+            Set<Long> excluded = primesDividing(p, f.level());
+            long x = s.complete(excluded);
+            long worstAt = 0;
+            String worstLeft = "";
+            String worstRight = "";
+            Residues.PrimeAbove worstPrime = null;
+            boolean anyHolds = false;
+            for (int k = 0; k < s.primes.size(); k++) {
+                Residues.PrimeAbove pr = s.primes.get(k);
+                if (c.prime != null && !pr.factor().equals(c.prime)) {
+                    continue;
+                }
+                FiniteField field = pr.field();
+                FiniteField.Element z;
+                try {
+                    z = f.zeta() == null ? null : Residues.reduce(f.zeta(), field);
+                } catch (ArithmeticException e) {
+                    continue;
+                }
+                long failAt = 0;
+                String left = "";
+                String right = "";
+                for (int idx = 0; idx < s.ells.length && s.ells[idx] <= x; idx++) {
+                    long ell = s.ells[idx];
+                    if (excluded.contains(ell)) {
+                        continue;
+                    }
+                    FiniteField.Element want = value(psi, ell, f, z, field)
+                            .multiply(field.fromLong(Residues.powMod(ell, Math.floorMod(c.i, p - 1), p)))
+                            .add(value(phi, ell, f, z, field)
+                                    .multiply(field.fromLong(Residues.powMod(ell, Math.floorMod(c.j, p - 1), p))));
+                    FiniteField.Element have = s.residue(k, idx);
+                    if (!have.equals(want)) {
+                        failAt = ell;
+                        left = have.toString();
+                        right = want.toString();
+                        break;
+                    }
+                }
+                if (failAt == 0) {
+                    anyHolds = true;
+                    break;
+                }
+                if (failAt > worstAt) {
+                    worstAt = failAt;
+                    worstLeft = left;
+                    worstRight = right;
+                    worstPrime = pr;
+                }
+            }
+            if (anyHolds || worstPrime == null) {
+                return false;
+            }
+            out.error(ID, c.row.at(), c.subject, "a_" + worstAt + "(" + f.id() + ") = ψ(" + worstAt + ")*" + worstAt
+                            + "^" + c.i + " + φ(" + worstAt + ")*" + worstAt + "^" + c.j + " = " + worstRight + " mod "
+                            + worstPrime, "a_" + worstAt + "(" + f.id() + ") = " + worstLeft,
+                    "the congruence fails at l = " + worstAt + ", the first prime l not dividing "
+                            + product(excluded) + " where the residues differ");
+            return true;
+        }
+
+        /** ψ(ℓ) mod 𝔭: ζ^{e·m/r} with m = ord χ_f, r = ord ψ (±1 for r ≤ 2). */
+        private static FiniteField.Element value(DirichletCharacter psi, long ell, Form f, FiniteField.Element z,
+                                                 FiniteField field) {
+            int e = psi.exponent(ell);
+            if (e == 0) {
+                return field.one();
+            }
+            if (psi.order() == 2) {
+                return field.one().negate();
+            }
+            FiniteField.Element v = field.one();
+            long power = (long) e * (f.character().order() / psi.order());
+            for (long t = 0; t < power; t++) {
+                v = v.multiply(z);
+            }
+            return v;
+        }
+
         @Override
         void evaluate(FindingSink out) {
             for (Claim c : claims) {
@@ -159,6 +252,15 @@ public final class ReducibleCheck implements Check {
                 out.error(ID, c.row.at(), c.subject, "ψφ = χ_f", mismatch,
                         "the claim is false: ρ̄_f^ss ≅ ψω^i ⊕ φω^j gives det ρ̄_f = ψφω^(i+j), while det ρ̄_f = (χ_f mod"
                                 + " 𝔭)ω^(k-1); p ∤ N and p ∤ ord(ψφχ̄_f), so ψφ ≠ χ_f stays different mod 𝔭");
+                return;
+            }
+            DirichletCharacter[] chars = withCharacters.get(c.row);
+            if (chars != null) {
+                claimText = "a_l(" + f.id() + ") = ψ(l)*l^" + c.i + " + φ(l)*l^" + c.j + " mod a prime above " + p
+                        + " (ψ = " + chars[0].cell() + ", φ = " + chars[1].cell() + ")";
+            }
+            if (chars != null && (reportIndexProblem(out, ID, c.row, c.subject, p, f)
+                    || compareWithCharacters(c, chars[0], chars[1], out))) {
                 return;
             }
             if (c.problem != null) {
