@@ -233,4 +233,18 @@ class CharactersTest {
                 "data/reducible.csv:3: error [reducible] reducible=lev31_wt1_chi2_o1 p=5 i=0 j=0: expected a_2(lev31_wt1_chi2_o1) = ψ(2)*2^0 + φ(2)*2^0 = 2 mod (5, x), found a_2(lev31_wt1_chi2_o1) = 4; the congruence fails at l = 2, the first prime l not dividing 155 where the residues differ",
                 "data/reducible.csv:4: error [reducible] reducible=lev23_wt1_chi2_o1 p=3 i=0 j=0: expected ψφ = χ_f, found ψφ = 1, χ_f = 5:1/2; the claim is false: ρ̄_f^ss ≅ ψω^i ⊕ φω^j gives det ρ̄_f = ψφω^(i+j), while det ρ̄_f = (χ_f mod 𝔭)ω^(k-1); p ∤ N and p ∤ ord(ψφχ̄_f), so ψφ ≠ χ_f stays different mod 𝔭"), lines);
     }
+
+    /**
+     * A rational form with a quadratic character: lev7_wt3_chi2_o1 (the CM form of S_3(7, (−7/·)), PARI a_3 = 0, 3
+     * inert in Q(√−7), χ(3) = −1). Then χ̄(3)a_3² = −a_3² must be ≥ 0, so a_3 = 0: a planted a_3 = 1 fails.
+     */
+    @Test
+    void inertPrimeOfACmFormWithRationalCoefficients() throws IOException {
+        Fixture f = Fixture.of(COEFFS);
+        String form = "lev7_wt3_chi2_o1";
+        assertEquals("0", f.valueOf(form, 3));
+        f.plant(form, 3, "1");
+        List<String> errors = run(f).stream().filter(e -> e.contains("[ramanujan-bound]")).toList();
+        assertEquals(List.of("data/coefficients.csv:" + f.lineOf(form, 3) + ": error [ramanujan-bound] form=lev7_wt3_chi2_o1 n=3: expected every embedding with χ̄(p)*a_p^2 real in [0, 4*p^(k-1)] = [0, 36], found a_p = 1, χ(p) = -1, χ̄(p)*a_p^2 = -1; χ̄(p)*a_p^2 is not real and >= 0 in every embedding, so conj(a_p) = χ̄(p)*a_p fails at p=3 (is a_p replaced by its complex conjugate, or χ(p) wrong?)"), errors);
+    }
 }

@@ -21,6 +21,10 @@ import java.util.Set;
  * choice of primes above p and identification of residue fields), or when k_f ≢ k_g + 2j mod (p − 1); CERTIFIED when
  * it holds for every ℓ up to the Sturm-type bound of {@link CongruenceBounds#forForms}; NOT CERTIFIED when the tables
  * stop before that bound. See docs/congruences.md.
+ *
+ * <p>With characters (det ρ̄_f = (χ_f mod 𝔭)ω^{k_f−1}): certified only for one common character χ with
+ * p ∤ N_f N_g · ord χ, under identifications of the residue fields that send ζ_f to ζ_g; FALSE when no identification
+ * does; NOT CERTIFIED, with the reason, for different characters or p | N_f N_g · ord χ (docs/checks.md).
  */
 public final class CongruenceCheck implements Check {
 
