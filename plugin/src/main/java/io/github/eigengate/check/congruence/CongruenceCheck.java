@@ -120,8 +120,12 @@ public final class CongruenceCheck implements Check {
                         + " with ω; see docs/congruences.md)";
             }
             int lcm = (int) (f.level() / gcd(f.level(), g.level()) * (long) g.level());
-            if (lcm > io.github.eigengate.arith.DirichletCharacter.MAX_MODULUS
-                    || !f.character().lift(lcm).equals(g.character().lift(lcm))) {
+            if ((long) f.level() / gcd(f.level(), g.level()) * g.level()
+                    > io.github.eigengate.arith.DirichletCharacter.MAX_MODULUS) {
+                return "lcm(N_f, N_g) is above " + io.github.eigengate.arith.DirichletCharacter.MAX_MODULUS
+                        + ", where characters are not compared";
+            }
+            if (!f.character().lift(lcm).equals(g.character().lift(lcm))) {
                 return "the characters of the two forms differ (" + f.character().cell() + " mod " + f.level()
                         + ", " + g.character().cell() + " mod " + g.level() + "): the Sturm-type bound is"
                         + " implemented for one common character only";
