@@ -650,7 +650,7 @@ public final class TraceFormula {
         if (cond == 0) {
             return 0;
         }
-        if (Arith.gcd(cond, lv.n) == 1) {
+        if (lv.coprimeToLevel(cond)) {
             long mu = beta ? lv.betaWeightedMu(t, n, disc, 1, scratch) : lv.mu(t, n, disc, 1, scratch);
             return mu == 0 ? 0 : mu * table.times12(m);
         }
@@ -777,6 +777,7 @@ public final class TraceFormula {
      * (not shared between threads).
      */
     private static final class Scratch {
+        static final Scratch NONE = new Scratch(0);
         final int[][] e;
         final long[][] c;
         final int[] size;
@@ -828,6 +829,11 @@ public final class TraceFormula {
         final long[] tauPhis;
         final boolean[] tauAllowed;
         final long[] tauInverse;
+        /** Bit i set when the i-th prime of M divides τ (resp. M/τ). */
+        final long[] tauMask;
+        final long[] coTauMask;
+        /** coprime[f] = ((f, M) = 1); grown on demand (a benign race: every version is correct). */
+        private volatile boolean[] coprime = new boolean[0];
 
         Level(long n, DirichletCharacter chi, long[] ramanujan) {
             this.n = n;
@@ -884,8 +890,12 @@ public final class TraceFormula {
             tauPhis = new long[taus.length];
             tauAllowed = new boolean[taus.length];
             tauInverse = new long[taus.length];
+            tauMask = new long[taus.length];
+            coTauMask = new long[taus.length];
             for (int i = 0; i < taus.length; i++) {
                 long tau = taus[i];
+                tauMask[i] = mask(tau);
+                coTauMask[i] = mask(n / tau);
                 long sigma = n / tau;
                 long g = Arith.gcd(tau, sigma);
                 tauGcds[i] = g;
@@ -914,13 +924,51 @@ public final class TraceFormula {
         }
 
         Scratch scratch() {
-            return new Scratch(slots);
+            return slots == 0 ? Scratch.NONE : new Scratch(slots);
+        }
+
+        /** Whether (f, M) = 1, from a table for the conductors f ≤ √(4n) of the discriminants met. */
+        boolean coprimeToLevel(long f) {
+            boolean[] c = coprime;
+            if (f >= c.length) {
+                boolean[] grown = new boolean[(int) Math.max(f + 1, 2L * c.length)];
+                for (int i = 1; i < grown.length; i++) {
+                    grown[i] = mask(i) == 0;
+                }
+                coprime = grown;
+                c = grown;
+            }
+            return c[(int) f];
+        }
+
+        /** The primes of M (by position) dividing x, as bits (M has at most 15 primes). */
+        long mask(long x) {
+            long m = 0;
+            for (int i = 0; i < primes.length; i++) {
+                if (x % primes[i] == 0) {
+                    m |= 1L << i;
+                }
+            }
+            return m;
+        }
+
+        /** The exponent of χ at a unit y mod M: the sum of its p-components over the primes of the conductor. */
+        int exponentOfUnit(long y) {
+            long e = 0;
+            for (int i = 0; i < primes.length; i++) {
+                if (slot[i] >= 0) {
+                    e += chiP[i][(int) Math.floorMod(y, pw[i][exps[i]])];
+                }
+            }
+            return (int) (e % order);
         }
 
         /** Tr_{Q(ζ_m)/Q} χ(s) (0 when (s, M) &gt; 1). */
         long chiTrace(long s) {
-            int e = chi.exponent(s);
-            return e < 0 ? 0 : ramanujan[e];
+            if (mask(s) != 0) {
+                return 0;
+            }
+            return trivial ? 1 : ramanujan[exponentOfUnit(s)];
         }
 
         /**
@@ -928,11 +976,13 @@ public final class TraceFormula {
          */
         long a3Inner(long d, long dPrime) {
             long s = 0;
+            long dMask = mask(d);
+            long dPrimeMask = mask(dPrime);
             for (int i = 0; i < taus.length; i++) {
                 long tau = taus[i];
                 long g = tauGcds[i];
-                if (!tauAllowed[i] || (dPrime - d) % g != 0 || Arith.gcd(d, tau) != 1
-                        || Arith.gcd(dPrime, n / tau) != 1) {
+                if (!tauAllowed[i] || (dMask & tauMask[i]) != 0 || (dPrimeMask & coTauMask[i]) != 0
+                        || (dPrime - d) % g != 0) {
                     continue;
                 }
                 if (trivial) {
@@ -942,7 +992,7 @@ public final class TraceFormula {
                 long mod = n / tau / g;
                 long k = mod == 1 ? 0 : Math.floorMod((dPrime - d) / g % mod * tauInverse[i] % mod, mod);
                 long y = Math.floorMod(d, n) + tau * k;
-                s += tauPhis[i] * ramanujan[chi.exponent(y)];
+                s += tauPhis[i] * ramanujan[exponentOfUnit(y)];
             }
             return s;
         }
@@ -950,7 +1000,9 @@ public final class TraceFormula {
         /** Tr of μ(t, f, n) = ψ(M)/ψ(M/M_f) · Σ_{x mod M, x² − tx + n ≡ 0 mod M·M_f} χ(x). */
         long mu(long t, long nn, long disc, long f, Scratch sc) {
             long r = 1;
-            Arrays.fill(sc.size, 0);
+            for (int i = 0; i < slots; i++) {
+                sc.size[i] = 0;
+            }
             for (int i = 0; i < primes.length; i++) {
                 int a = exps[i];
                 if (slot[i] < 0) {
@@ -976,7 +1028,9 @@ public final class TraceFormula {
          */
         long betaWeightedMu(long t, long nn, long disc, long f, Scratch sc) {
             long r = 1;
-            Arrays.fill(sc.size, 0);
+            for (int i = 0; i < slots; i++) {
+                sc.size[i] = 0;
+            }
             for (int i = 0; i < primes.length; i++) {
                 int a = exps[i];
                 if (slot[i] < 0) {
@@ -1017,31 +1071,29 @@ public final class TraceFormula {
             return b == a ? pw[i][a - 1] * (primes[i] + 1) : pw[i][b];
         }
 
-        /** Tr_{Q(ζ_m)/Q} of the product of the slots' elements. */
+        /** Tr_{Q(ζ_m)/Q} of the product of the slots' elements (expanded term by term, traced at the end). */
         private long traceOfProduct(Scratch sc) {
-            int[] e = sc.e[0];
-            long[] c = sc.c[0];
-            int size = sc.size[0];
-            for (int s = 1; s < slots; s++) {
-                int[] e2 = sc.e[s];
-                long[] c2 = sc.c[s];
-                int size2 = sc.size[s];
-                int[] ne = new int[size * size2];
-                long[] nc = new long[size * size2];
-                int k = 0;
-                for (int x = 0; x < size; x++) {
-                    for (int y = 0; y < size2; y++) {
-                        ne[k] = (e[x] + e2[y]) % order;
-                        nc[k++] = c[x] * c2[y];
-                    }
+            if (slots == 1) {
+                int[] e = sc.e[0];
+                long[] c = sc.c[0];
+                long tr = 0;
+                for (int x = 0; x < sc.size[0]; x++) {
+                    tr += c[x] * ramanujan[e[x]];
                 }
-                e = ne;
-                c = nc;
-                size = k;
+                return tr;
+            }
+            return traceFrom(sc, 0, 0, 1);
+        }
+
+        private long traceFrom(Scratch sc, int s, int exponent, long coefficient) {
+            if (s == slots) {
+                return coefficient * ramanujan[exponent];
             }
             long tr = 0;
-            for (int x = 0; x < size; x++) {
-                tr += c[x] * ramanujan[e[x]];
+            int[] e = sc.e[s];
+            long[] c = sc.c[s];
+            for (int x = 0; x < sc.size[s]; x++) {
+                tr += traceFrom(sc, s + 1, (exponent + e[x]) % order, coefficient * c[x]);
             }
             return tr;
         }
@@ -1065,9 +1117,11 @@ public final class TraceFormula {
                     if (sq < 0) {
                         return;
                     }
-                    long tm = Math.floorMod(t, p);
+                    long tm = t % p; // t ≥ 0
                     for (int sign = -1; sign <= 1; sign += 2) {
-                        long x0 = (tm + sign * sq + p) % p * inv2 % p;
+                        long u = tm + sign * sq;
+                        u = u < 0 ? u + p : (u >= p ? u - p : u);
+                        long x0 = (u & 1) == 0 ? u >> 1 : (u + p) >> 1; // u/2 mod p
                         if (x0 != 0) {
                             sc.add(at, table[(int) (j == 1 ? x0 : hensel(x0, p, q, t, nn))], coefficient);
                         }
@@ -1106,6 +1160,13 @@ public final class TraceFormula {
 
         private static void search(long x0, long p, int j, long qe, long t, long nn, int[] table, Scratch sc, int at,
                                    long coefficient) {
+            if (j == 1) {
+                // x0 ≡ t/2 is a root mod p (its value is −D/4 ≡ 0); mod p^{1+b} it must be tested
+                if (qe == p || Math.floorMod(x0 * x0 - t * x0 + nn, qe) == 0) {
+                    sc.add(at, table[(int) x0], coefficient);
+                }
+                return;
+            }
             long[] cur = {x0};
             int size = 1;
             long mod = p;
@@ -1141,11 +1202,7 @@ public final class TraceFormula {
             long p = primes[i];
             int b = (f == 1) ? 0 : Math.min(a, Arith.valuation(f, p));
             long c = localCount(p, a, b, t, nn, disc, qr[i]);
-            if (c != 0 && b > 0) {
-                // ψ(p^a)/ψ(p^{a−b})
-                c *= (b == a) ? Arith.powExact(p, a - 1) * (p + 1) : Arith.powExact(p, b);
-            }
-            return c;
+            return c == 0 || b == 0 ? c : c * ratio(i, a, b);
         }
     }
 }
