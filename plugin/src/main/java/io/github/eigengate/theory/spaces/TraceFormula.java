@@ -549,11 +549,11 @@ public final class TraceFormula {
             int hornerLen = len + ((terms - 1) * bitLength(n)) / 32 + 2;
             long[] hp = new long[hornerLen];
             long[] hn = new long[hornerLen];
+            int topP = 0;
+            int topN = 0;
             for (int j = terms - 1; j >= 0; j--) {
-                mulSmall(hp, n);
-                addInto(hp, pos[j]);
-                mulSmall(hn, n);
-                addInto(hn, neg[j]);
+                topP = addInto(hp, pos[j], mulSmall(hp, n, topP));
+                topN = addInto(hn, neg[j], mulSmall(hn, n, topN));
             }
             return toBig(hp).subtract(toBig(hn)).add(slow);
         }
@@ -589,24 +589,35 @@ public final class TraceFormula {
         }
     }
 
-    /** acc *= n for 0 ≤ n &lt; 2^31. */
-    static void mulSmall(long[] acc, long n) {
+    /** acc *= n for 0 ≤ n &lt; 2^31, acc[top..] = 0; returns the new bound on the used words. */
+    static int mulSmall(long[] acc, long n, int top) {
         long carry = 0;
-        for (int i = 0; i < acc.length; i++) {
+        for (int i = 0; i < top; i++) {
             long v = acc[i] * n + carry;
             acc[i] = v & MASK;
             carry = v >>> 32;
         }
-        if (carry != 0) {
-            throw new IllegalStateException("word accumulator too short");
+        while (carry != 0) {
+            acc[top++] = carry & MASK;
+            carry >>>= 32;
         }
+        return top;
     }
 
-    /** acc += b (b no longer than acc). */
-    static void addInto(long[] acc, long[] b) {
+    /** acc *= n for 0 ≤ n &lt; 2^31. */
+    static void mulSmall(long[] acc, long n) {
+        mulSmall(acc, n, acc.length);
+    }
+
+    /** acc += b for acc with words used below {@code top}; returns the new bound on the used words. */
+    static int addInto(long[] acc, long[] b, int top) {
+        int used = b.length;
+        while (used > 0 && b[used - 1] == 0) {
+            used--;
+        }
         long carry = 0;
         int i = 0;
-        for (; i < b.length; i++) {
+        for (; i < used; i++) {
             long v = acc[i] + b[i] + carry;
             acc[i] = v & MASK;
             carry = v >>> 32;
@@ -617,6 +628,7 @@ public final class TraceFormula {
             carry = v >>> 32;
             i++;
         }
+        return Math.max(top, i);
     }
 
     static BigInteger toBig(long[] acc) {
