@@ -171,21 +171,42 @@ public final class CatalogReader {
         CsvTable.of(file, shown, Tables.SPACES_REQUIRED, Tables.SPACES_OPTIONAL).read(problems, row -> {
             String subject = "space=line " + row.line();
             Integer level = Cells.integer(row, "level", 1, Integer.MAX_VALUE, subject, problems);
-            Integer weight = Cells.weight(row, subject, problems);
-            String character = row.get("character");
-            if (!character.isEmpty() && !character.equals("1")) {
-                problems.error(row.at("character"), subject, "empty or 1 (the trivial character)", character,
-                        "nontrivial characters are not supported yet");
+            Integer weight = Cells.integer(row, "weight", 1, Cells.MAX_WEIGHT, subject, problems);
+            String cell = row.get("character");
+            boolean trivialCell = cell.isBlank() || cell.strip().equals("1");
+            DirichletCharacter character = null;
+            if (level != null) {
+                CharacterCell.Parsed parsed = CharacterCell.parse(cell, level);
+                if (parsed.ok()) {
+                    character = parsed.character().isTrivial() ? DirichletCharacter.trivial(level)
+                            : parsed.character();
+                } else {
+                    problems.error(row.at("character"), subject, CharacterCell.EXPECTED, cell,
+                            "the character cannot be read: " + parsed.problem());
+                    return;
+                }
+            }
+            if (weight != null && character != null && character.isOdd() != (weight % 2 != 0)) {
+                if (character.isTrivial() && trivialCell) {
+                    problems.error(row.at("weight"), subject, "an even weight", Integer.toString(weight),
+                            "with the trivial character there are no forms of odd weight (−I ∈ Γ0(N) acts as (−1)^k)");
+                } else {
+                    int sign = character.isOdd() ? -1 : 1;
+                    problems.error(row.at("weight"), subject, (sign < 0 ? "an odd" : "an even")
+                            + " weight (χ(−1) = " + sign + " = (−1)^k)", Integer.toString(weight),
+                            "S_k(N, χ) = 0 unless χ(−1) = (−1)^k, since −I ∈ Γ0(N) acts on it by χ(−1)(−1)^k");
+                }
                 return;
             }
             if (level == null || weight == null) {
                 return;
             }
-            SpaceKey key = new SpaceKey(level, weight);
-            Integer before = seen.putIfAbsent(key, row.line());
+            SpaceKey key = new SpaceKey(level, weight, character);
+            Integer before = seen.putIfAbsent(key.orbit(), row.line());
             if (before != null) {
                 problems.warning(row.at(), "space=" + key, "each space once", key.toString(),
-                        "the space is already declared at line " + before);
+                        "the space is already declared at line " + before
+                                + (character.order() > 2 ? " (Galois-conjugate characters name the same space)" : ""));
                 return;
             }
             spaces.add(new SpaceRow(key, row.at()));

@@ -17,10 +17,19 @@ final class Spaces {
         return new Subject("space", space.toString(), "");
     }
 
+    /** The orbit key of the space a form lies in, or null when its character is not one mod its level. */
+    static SpaceKey orbitOf(Form f) {
+        if (f.character().modulus() != f.level()) {
+            return null;
+        }
+        return new SpaceKey(f.level(), f.weight(), f.character()).orbit();
+    }
+
+    /** The forms of the space's Galois orbit: same level and weight, character Galois-conjugate to the space's. */
     static List<Form> formsOf(Catalog catalog, SpaceKey space) {
         List<Form> forms = new ArrayList<>();
         for (Form f : catalog.forms().values()) {
-            if (f.space().equals(space)) {
+            if (space.contains(f.level(), f.weight(), f.character())) {
                 forms.add(f);
             }
         }

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import io.github.eigengate.arith.DirichletCharacter;
 import io.github.eigengate.theory.Arith;
 import java.util.List;
 import org.junit.jupiter.api.Test;
@@ -21,6 +22,63 @@ class DimensionsTest {
             assertEquals(Long.parseLong(r[2]), Dimensions.cuspForms(n, k), "dim S_" + k + "(" + n + ")");
             assertEquals(Long.parseLong(r[3]), Dimensions.newforms(n, k), "dim S_" + k + "^new(" + n + ")");
         }
+    }
+
+    /**
+     * Fixture dimensions-chi.csv: PARI/GP mfdim([N,k,χ],1) and mfdim([N,k,χ],0), N ≤ 100, 2 ≤ k ≤ 6, one character
+     * per Galois orbit, χ given on the generators of znstar(N,1).
+     */
+    @Test
+    void matchesPariWithCharacterForAllLevelsUpTo100() {
+        List<String[]> rows = Fixtures.rows("dimensions-chi.csv");
+        assertEquals(4460, rows.size());
+        int nontrivial = 0;
+        for (String[] r : rows) {
+            int n = Integer.parseInt(r[0]);
+            int k = Integer.parseInt(r[1]);
+            DirichletCharacter chi = character(r[2], n);
+            assertEquals(Integer.parseInt(r[3]), chi.order(), r[2] + " mod " + n);
+            String what = "S_" + k + "(" + n + ", " + r[2] + ")";
+            assertEquals(Long.parseLong(r[4]), Dimensions.cuspForms(chi, k), "dim " + what);
+            assertEquals(Long.parseLong(r[5]), Dimensions.newforms(chi, k), "dim new " + what);
+            nontrivial += chi.isTrivial() ? 0 : 1;
+        }
+        assertTrue(nontrivial > 3000);
+    }
+
+    /** dim S_k(N, χ) = Σ_{𝔣 | M | N} σ0(N/M) dim S_k^new(M, χ_M) (Atkin–Lehner–Li), one χ per Galois orbit mod N ≤ 100. */
+    @Test
+    void oldformMultiplicityRelationHoldsWithCharacter() {
+        for (String[] r : Fixtures.rows("dimensions-chi.csv")) {
+            int n = Integer.parseInt(r[0]);
+            int k = Integer.parseInt(r[1]);
+            DirichletCharacter chi = character(r[2], n);
+            int cond = chi.conductor();
+            long sum = 0;
+            for (long m : Arith.divisors(Arith.factor(n / cond))) {
+                sum += Arith.sigma0(n / cond / m) * Dimensions.newforms(chi.restrictTo((int) (m * cond)), k);
+            }
+            assertEquals(Dimensions.cuspForms(chi, k), sum, r[2] + " mod " + n + ", k = " + k);
+        }
+    }
+
+    /** A character in the fixtures' g:a/b syntax ({@code 1} = trivial). */
+    static DirichletCharacter character(String cell, int modulus) {
+        if (cell.equals("1")) {
+            return DirichletCharacter.trivial(modulus);
+        }
+        String[] pairs = cell.split(";");
+        long[] g = new long[pairs.length];
+        long[] a = new long[pairs.length];
+        long[] b = new long[pairs.length];
+        for (int i = 0; i < pairs.length; i++) {
+            String[] ga = pairs[i].split(":");
+            String[] ab = ga[1].split("/");
+            g[i] = Long.parseLong(ga[0]);
+            a[i] = Long.parseLong(ab[0]);
+            b[i] = Long.parseLong(ab[1]);
+        }
+        return DirichletCharacter.fromValues(modulus, g, a, b);
     }
 
     /** Textbook values, from memory: Diamond–Shurman §3.9 / Stein, Modular Forms: A Computational Approach. */

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import io.github.eigengate.arith.DirichletCharacter;
 import io.github.eigengate.theory.Arith;
 import java.math.BigInteger;
 import java.util.HashMap;
@@ -195,6 +196,90 @@ class TraceFormulaTest {
         assertTrue(tr.bitLength() > 64);
     }
 
+    /**
+     * Fixture traces-chi.csv: for 24 spaces S_k(N, χ) (orders 2 to 12, odd weights, two and three generators,
+     * imprimitive χ), Tr_{Q(χ)/Q} of the n-th coefficient of mftraceform([N,k,χ],1) and mftraceform([N,k,χ],0) from
+     * PARI/GP, n = 1..60 (script in the fixture header; it checks the trace against the sum over the orbit).
+     */
+    @Test
+    void matchesPariWithCharacter() {
+        List<String[]> rows = Fixtures.rows("traces-chi.csv");
+        assertEquals(48, rows.size());
+        HurwitzClassNumbers t = HurwitzClassNumbers.upTo(240);
+        int checked = 0;
+        for (String[] r : rows) {
+            int level = Integer.parseInt(r[0]);
+            int k = Integer.parseInt(r[1]);
+            DirichletCharacter chi = DimensionsTest.character(r[2], level);
+            assertEquals(Integer.parseInt(r[3]), chi.order());
+            assertEquals(Integer.parseInt(r[4]), chi.conductor());
+            boolean full = r[5].equals("1");
+            String[] coeffs = r[6].split(" ");
+            assertEquals(60, coeffs.length);
+            TraceFormula tf = TraceFormula.forCharacter(chi, t);
+            for (int n = 1; n <= 60; n++) {
+                BigInteger expected = new BigInteger(coeffs[n - 1]);
+                String what = "orbit trace of T_" + n + " on S_" + k + (full ? "" : "^new") + "(" + level + ", "
+                        + r[2] + ")";
+                if (full) {
+                    assertEquals(expected, tf.trace(k, n), what);
+                    checked++;
+                } else if (Arith.gcd(n, level) == 1) {
+                    assertEquals(expected, tf.newTrace(k, n), what);
+                    assertEquals(expected, tf.newTraceBySummingLevels(k, n), what + " level by level");
+                    checked++;
+                }
+            }
+        }
+        assertTrue(checked > 2000, "checked " + checked);
+    }
+
+    /**
+     * Fixture traces-chi-wide.csv: one χ per Galois orbit for every N in 3..80 and 81, 96, 100, 121, 125, 128, 144, 169,
+     * 243, 256 (the least weight with S_k(N, χ) ≠ 0 among the two of the right parity), orbit traces of the n-th
+     * coefficient of mftraceform([N,k,χ],1) and mftraceform([N,k,χ],0) from PARI/GP, n = 1..40.
+     */
+    @Test
+    void matchesPariWithCharacterForManyLevels() {
+        List<String[]> rows = Fixtures.rows("traces-chi-wide.csv");
+        assertEquals(1350, rows.size());
+        HurwitzClassNumbers t = HurwitzClassNumbers.upTo(160);
+        for (String[] r : rows) {
+            int level = Integer.parseInt(r[0]);
+            int k = Integer.parseInt(r[1]);
+            DirichletCharacter chi = DimensionsTest.character(r[2], level);
+            assertEquals(Integer.parseInt(r[4]), chi.conductor());
+            boolean full = r[5].equals("1");
+            String[] coeffs = r[6].split(" ");
+            TraceFormula tf = TraceFormula.forCharacter(chi, t);
+            for (int n = 1; n <= 40; n++) {
+                BigInteger expected = new BigInteger(coeffs[n - 1]);
+                String what = "orbit trace of T_" + n + " on S_" + k + (full ? "" : "^new") + "(" + level + ", "
+                        + r[2] + ")";
+                if (full) {
+                    assertEquals(expected, tf.trace(k, n), what);
+                } else if (Arith.gcd(n, level) == 1) {
+                    assertEquals(expected, tf.newTrace(k, n), what);
+                }
+            }
+        }
+    }
+
+    /** Tr T_1 with a character is [Q(χ):Q]·dim, and dim comes from the Cohen–Oesterlé formula (checked against gp). */
+    @Test
+    void traceOfIdentityIsDimensionWithCharacter() {
+        HurwitzClassNumbers small = HurwitzClassNumbers.upTo(4);
+        for (String[] r : Fixtures.rows("dimensions-chi.csv")) {
+            int level = Integer.parseInt(r[0]);
+            int k = Integer.parseInt(r[1]);
+            DirichletCharacter chi = DimensionsTest.character(r[2], level);
+            TraceFormula tf = TraceFormula.forCharacter(chi, small);
+            long orbit = chi.orbitSize();
+            assertEquals(BigInteger.valueOf(orbit * Long.parseLong(r[4])), tf.trace(k, 1), level + " " + k + " " + r[2]);
+            assertEquals(BigInteger.valueOf(orbit * Long.parseLong(r[5])), tf.newTrace(k, 1), level + " " + k + " " + r[2]);
+        }
+    }
+
     @Test
     void oddWeightIsZero() {
         TraceFormula tf = TraceFormula.forLevel(23, TABLE);
@@ -284,15 +369,37 @@ class TraceFormulaTest {
         return disc % (pb * pb) == 0 && Math.floorMod(q, 4) <= 1;
     }
 
-    /** U_j(t, n) = (ρ^j − ρ̄^j)/(ρ − ρ̄): U_{11}(0, 1) = −1 and U_j(2, 1) = j (double root 1). */
+    /**
+     * U_j(t, n) = (ρ^j − ρ̄^j)/(ρ − ρ̄): U_{11}(0, 1) = −1 and U_j(2, 1) = j (double root 1); the tabulated
+     * expansion Σ_j (−1)^j C(k−2−j, j) t^{k−2−2j} n^j agrees with the recurrence (weights up to 160).
+     */
     @Test
     void lucasSequence() {
-        assertEquals(0, TraceFormula.lucasU(5, 7, 0));
-        assertEquals(1, TraceFormula.lucasU(5, 7, 1));
-        assertEquals(-1, TraceFormula.lucasU(0, 1, 11));
+        assertEquals(BigInteger.ZERO, TraceFormula.lucasUBig(5, 7, 0));
+        assertEquals(BigInteger.ONE, TraceFormula.lucasUBig(5, 7, 1));
+        assertEquals(BigInteger.valueOf(-1), TraceFormula.lucasUBig(0, 1, 11));
         for (int j = 0; j < 30; j++) {
-            assertEquals(j, TraceFormula.lucasU(2, 1, j));
+            assertEquals(BigInteger.valueOf(j), TraceFormula.lucasUBig(2, 1, j));
         }
-        assertThrows(ArithmeticException.class, () -> TraceFormula.lucasU(1, 1L << 40, 5));
+        BigInteger a = new BigInteger("123456789012345678901234567890");
+        long[] acc = new long[8];
+        TraceFormula.addMul(acc, TraceFormula.toWords(a), (1L << 30) - 1);
+        TraceFormula.mulSmall(acc, (1L << 31) - 1);
+        assertEquals(a.multiply(BigInteger.valueOf((1L << 30) - 1)).multiply(BigInteger.valueOf((1L << 31) - 1)),
+                TraceFormula.toBig(acc));
+    }
+
+    /** High weights go through the tabulated expansion; they agree with the plain BigInteger recurrence. */
+    @Test
+    void tabulatedHighWeightAgreesWithRecurrence() {
+        HurwitzClassNumbers t = HurwitzClassNumbers.upTo(2000);
+        for (int level : new int[] {1, 2, 11, 30}) {
+            TraceFormula tf = TraceFormula.forLevel(level, t);
+            for (int k : new int[] {24, 60, 160}) {
+                for (long n = 1; n <= 500; n += 37) {
+                    assertEquals(tf.trace(k, n), tf.traceByRecurrence(k, n), "N=" + level + " k=" + k + " n=" + n);
+                }
+            }
+        }
     }
 }
