@@ -2,7 +2,6 @@ package io.github.eigengate.check.space;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
-import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
 import io.github.eigengate.engine.Datasets;
 import io.github.eigengate.engine.Fixture;
@@ -19,9 +18,7 @@ import org.junit.jupiter.api.io.TempDir;
 
 /**
  * End to end through the readers: datasets/spaces-chi (PARI/GP 2.15.2, fixtures-gp/spaces-chi.gp; see
- * {@link SpaceCharacterTest}) read from disk, forms.csv with its character and zeta columns included. Runs once the
- * forms reader accepts nontrivial characters (until then forms.csv rows with a character are refused, and the test
- * is skipped by its assumption rather than failing).
+ * {@link SpaceCharacterTest}) read from disk, forms.csv with its character and zeta columns included.
  */
 class SpaceCharacterDatasetTest {
 
@@ -40,8 +37,8 @@ class SpaceCharacterDatasetTest {
         Datasets.write(dir, "forms.csv", forms, "coefficients.csv", coefficients, "spaces.csv", read("spaces.csv"));
         Report r = new Gate(Settings.defaults(), List.of(new SpaceDimension(), new SpaceTraces()))
                 .run(List.of(new Gate.Dataset(dir, "data")));
-        assumeTrue(Datasets.lines(r).stream().noneMatch(l -> l.startsWith("data/forms.csv")),
-                "the forms reader does not accept characters yet");
+        assertTrue(Datasets.lines(r).stream().noneMatch(l -> l.startsWith("data/forms.csv")),
+                "the forms reader accepts every character row");
         return r;
     }
 
