@@ -1,0 +1,73 @@
+package io.github.eigengate.theory.curves;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import io.github.eigengate.arith.WeierstrassModel;
+import java.math.BigInteger;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.junit.jupiter.api.Test;
+
+/**
+ * Tate's algorithm against PARI/GP's {@code elllocalred} and {@code ellglobalred} on every curve of
+ * curves/tate.csv (all curves of conductor 11..600 of the pari-elldata database, conductors with 2^8 and 3^5, and
+ * non-minimal models; the gp commands are in the file's header and fixtures-gp/curves-reference.gp).
+ */
+class TateTest {
+
+    @Test
+    void localDataAgreeWithPariAtEveryPrimeOfTheDiscriminant() {
+        List<Map<String, String>> rows = CurveFixtures.rows("tate.csv");
+        assertTrue(rows.size() > 8000, "rows: " + rows.size());
+        List<String> wrong = new ArrayList<>();
+        Map<String, BigInteger> conductors = new LinkedHashMap<>();
+        Map<String, BigInteger> expected = new LinkedHashMap<>();
+        for (Map<String, String> row : rows) {
+            WeierstrassModel e = CurveFixtures.model(row.get("curve"));
+            BigInteger p = new BigInteger(row.get("p"));
+            LocalReduction local = Tate.reduce(e, p);
+            String got = local.exponent() + " " + local.kodaira() + " " + local.tamagawa();
+            String want = row.get("f") + " " + row.get("kodaira") + " " + row.get("c");
+            if (!got.equals(want)) {
+                wrong.add(row.get("curve") + " p=" + p + ": PARI " + want + ", ours " + got);
+            }
+            conductors.merge(row.get("curve"), p.pow(local.exponent()), BigInteger::multiply);
+            expected.put(row.get("curve"), new BigInteger(row.get("conductor")));
+        }
+        assertEquals(List.of(), wrong.subList(0, Math.min(20, wrong.size())));
+        assertEquals(expected, conductors);
+    }
+
+    @Test
+    void conductorAgainstTheLevelNamesThePrimeAndTheKodairaSymbol() {
+        // [0,0,0,-1,0]: y² = x³ − x, conductor 32, type III at 2 (curves/tate.csv, elllocalred(E, 2) = [5, 3, ...])
+        WeierstrassModel e = WeierstrassModel.of(0, 0, 0, -1, 0);
+        assertEquals(List.of(), Conductors.against(e, 32));
+        List<Conductors.Mismatch> m = Conductors.against(e, 64);
+        assertEquals(1, m.size());
+        assertEquals(BigInteger.TWO, m.get(0).p());
+        assertEquals(6, m.get(0).expected());
+        assertEquals("III", m.get(0).local().kodaira());
+        assertEquals(5, m.get(0).local().exponent());
+    }
+
+    @Test
+    void aPrimeOutsideTheLevelIsFoundWithoutKnowingIt() {
+        // the level-11 curve [0,-1,1,-10,-20] against level 1: bad at 11, type I5 (curves/tate.csv)
+        WeierstrassModel e = WeierstrassModel.of(0, -1, 1, -10, -20);
+        List<Conductors.Mismatch> m = Conductors.against(e, 1);
+        assertEquals(1, m.size());
+        assertEquals(BigInteger.valueOf(11), m.get(0).p());
+        assertEquals("I5", m.get(0).local().kodaira());
+    }
+
+    @Test
+    void aNonMinimalModelAtALargePrimeStillHasItsConductor() {
+        // scaled by u = 1000003 (prime): disc · u^12; Kraus's test sees good reduction there without factoring
+        WeierstrassModel e = WeierstrassModel.of(0, -1, 1, -10, -20).scaleUp(BigInteger.valueOf(1_000_003));
+        assertEquals(List.of(), Conductors.against(e, 11));
+    }
+}
