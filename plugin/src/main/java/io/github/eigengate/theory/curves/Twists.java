@@ -8,8 +8,8 @@ import java.util.List;
  * a_p = χ_d(p)·a_p(E) at p ∤ d (Shimura, <i>Introduction to the Arithmetic Theory of Automorphic Functions</i>,
  * Prop. 3.64), χ_d the Kronecker character of the fundamental discriminant d. An odd prime of d not dividing the
  * conductor of E makes the twist additive there, so it divides the level of the table's form: the candidates d are
- * built from −4, ±8 and p* = (−1)^((p−1)/2)·p for the odd primes of the two levels and the primes where the table
- * has a_p = 0 but the curve not.
+ * built from −4, ±8 and p* = (−1)^((p−1)/2)·p for the odd primes of the two levels and the primes where one of
+ * the table and the curve has a_p = 0 and the other not.
  */
 public final class Twists {
 
@@ -30,7 +30,8 @@ public final class Twists {
             }
         }
         for (int i = 0; i < primes.length && odd.size() < 16; i++) {
-            if (primes[i] != 2 && form[i] == 0 && curve[i] != 0 && !odd.contains((long) primes[i])) {
+            boolean oneZero = (form[i] == 0) != (curve[i] == 0);
+            if (primes[i] != 2 && oneZero && !odd.contains((long) primes[i])) {
                 odd.add((long) primes[i]);
             }
         }
