@@ -70,3 +70,16 @@ seen = Map(); found = List();
     write(TO, Str(cv(a), ",", elltors(ellinit(a))[1], ",\"", elltors(ellinit(a))[2], "\"")));
 }
 print("torsion.csv: ", #found, " structures");
+
+\\ ---- twists.csv: quadratic twists of a few curves by fundamental discriminants
+TW = "plugin/src/test/resources/curves/twists.csv";
+system(Str("rm -f ", TW));
+head(TW, "# twist = ellminimalmodel(ellinit(elltwist(ellinit(curve), d))) for fundamental discriminants d; conductor = ellglobalred(ellinit(twist))[1]");
+write(TW, "curve,d,twist,conductor");
+{
+  foreach ([[0,-1,1,-10,-20], [0,0,1,-1,0], [0,0,1,-7,6], [0,0,0,-1,0]], a,
+    foreach ([-3, -4, 5, -7, 8, -8, 12, 13, -15, -20, 21, -24, 28, 33, -39, 40, -55, 56, 60, -84, 105, -120], d,
+      my(T = ellminimalmodel(ellinit(elltwist(ellinit(a), d))));
+      write(TW, Str(cv(a), ",", d, ",", cv(vector(5, i, T[i])), ",", ellglobalred(T)[1]))));
+}
+print("twists.csv written");
