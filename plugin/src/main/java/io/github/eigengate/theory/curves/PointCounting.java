@@ -336,15 +336,16 @@ public final class PointCounting {
                 return;
             }
             long yy = mul(jy, jy);
-            long s = mul(4 * jx % p, yy);
+            long s = mul(dbl(dbl(jx)), yy);
             long zz = mul(jz, jz);
-            long mm = (3 * mul(jx, jx) + mul(ca, mul(zz, zz))) % p;
-            long x3 = (mul(mm, mm) - 2 * s % p + 2 * p) % p;
-            long y3 = (mul(mm, (s - x3 + p) % p) - 8 * mul(yy, yy) % p + p) % p;
-            long z3 = mul(2 * jy % p, jz);
+            long xx = mul(jx, jx);
+            long mm = add(add(dbl(xx), xx), mul(ca, mul(zz, zz)));
+            long x3 = sub(mul(mm, mm), dbl(s));
+            long y4 = mul(yy, yy);
+            long y3 = sub(mul(mm, sub(s, x3)), dbl(dbl(dbl(y4))));
+            jz = mul(dbl(jy), jz);
             jx = x3;
             jy = y3;
-            jz = z3;
         }
 
         /** (jx, jy, jz) ← (jx, jy, jz) + (x, y), the second point affine (mixed addition). */
@@ -358,8 +359,8 @@ public final class PointCounting {
             long z2 = mul(jz, jz);
             long u2 = mul(x, z2);
             long s2 = mul(y, mul(z2, jz));
-            long h = (u2 - jx + p) % p;
-            long r = (s2 - jy + p) % p;
+            long h = sub(u2, jx);
+            long r = sub(s2, jy);
             if (h == 0) {
                 if (r == 0) {
                     doubleJ();
@@ -371,11 +372,26 @@ public final class PointCounting {
             long h2 = mul(h, h);
             long h3 = mul(h2, h);
             long v = mul(jx, h2);
-            long x3 = ((mul(r, r) - h3 - 2 * v) % p + 2 * p) % p;
-            long y3 = (mul(r, (v - x3 + p) % p) - mul(jy, h3) + p) % p;
+            long x3 = sub(sub(mul(r, r), h3), dbl(v));
+            long y3 = sub(mul(r, sub(v, x3)), mul(jy, h3));
             jz = mul(jz, h);
             jx = x3;
             jy = y3;
+        }
+
+        private long add(long x, long y) {
+            long t = x + y;
+            return t >= p ? t - p : t;
+        }
+
+        private long dbl(long x) {
+            long t = x << 1;
+            return t >= p ? t - p : t;
+        }
+
+        private long sub(long x, long y) {
+            long t = x - y;
+            return t < 0 ? t + p : t;
         }
 
         /** x·y mod p through a floating-point quotient estimate, corrected exactly (0 ≤ x, y < p < 2^31). */
