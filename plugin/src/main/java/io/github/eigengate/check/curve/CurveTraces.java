@@ -44,6 +44,15 @@ public final class CurveTraces implements Check {
                 }
                 Coefficients<?> c = form.coefficients();
                 int[] primes = primesIn(c);
+                if (primes.length == 0) {
+                    for (CurveRow row : curves) {
+                        out.examined(ID, Subject.form(row.form()));
+                        out.warning(ID, row.curveAt(), Subject.form(row.form()), "a_p for some prime p",
+                                "no a_p in the tables", "the curve's a_p cannot be compared: the form has no "
+                                        + "coefficient at a prime (not checked)");
+                    }
+                    return;
+                }
                 long[] values = new long[primes.length];
                 for (int i = 0; i < primes.length; i++) {
                     Object v = c.get(primes[i]);

@@ -17,6 +17,16 @@ import org.junit.jupiter.api.Test;
 class CurveChecksTest {
 
     @Test
+    void aFormWithoutCoefficientsIsNotPassedSilently(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir) {
+        // [0,-1,1,-10,-20]: conductor 11, torsion 5 (PARI/GP: ellglobalred, elltors; curves/tate.csv, torsion.csv)
+        Datasets.write(dir, "forms.csv", "id,level,weight\nf11,11,2\n", "curves.csv",
+                "form,curve,torsion\nf11,\"[0,-1,1,-10,-20]\",5\n");
+        assertEquals(List.of("data/curves.csv:2:2: warning [curve-traces] form=f11: expected a_p for some prime p, "
+                + "found no a_p in the tables; the curve's a_p cannot be compared: the form has no coefficient at a "
+                + "prime (not checked)"), Datasets.lines(Datasets.run(dir)));
+    }
+
+    @Test
     void rightCurvesPass() {
         Report r = Datasets.run(Fixture.dataset("curves"));
         assertEquals(List.of(), Datasets.lines(r));
