@@ -70,4 +70,21 @@ class TateTest {
         WeierstrassModel e = WeierstrassModel.of(0, -1, 1, -10, -20).scaleUp(BigInteger.valueOf(1_000_003));
         assertEquals(List.of(), Conductors.against(e, 11));
     }
+
+    @Test
+    void badPrimesBeyondTheTrialLimitAreStillFound() {
+        // PARI/GP: E = ellinit([0,0,0,1,10000001]); factor(abs(E.disc)) = [2,4; 19,1; 8636857,1; 16453357,1],
+        // ellglobalred(E)[1] = 43200008640000496. Against N = 16·19·8636857 the prime 16453357 > 10^6 is missing:
+        // the trial division to 10^6 leaves it, and below 10^12 it is prime, so it is named.
+        WeierstrassModel e = WeierstrassModel.of(0, 0, 0, 1, 10_000_001);
+        long n = 16L * 19 * 8636857;
+        List<Conductors.Mismatch> m = Conductors.against(e, n);
+        assertEquals(1, m.size());
+        assertEquals(BigInteger.valueOf(16453357), m.get(0).p());
+        assertEquals("I1", m.get(0).local().kodaira());
+        // against N = 16·19 both large primes are missing; 8636857·16453357 > 10^12 is left unfactored
+        List<Conductors.Mismatch> two = Conductors.against(e, 16L * 19);
+        assertEquals(1, two.size());
+        assertEquals(BigInteger.valueOf(8636857L * 16453357L), two.get(0).cofactor());
+    }
 }
