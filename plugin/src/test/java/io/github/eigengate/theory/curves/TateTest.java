@@ -87,4 +87,26 @@ class TateTest {
         assertEquals(1, two.size());
         assertEquals(BigInteger.valueOf(8636857L * 16453357L), two.get(0).cofactor());
     }
+
+    @Test
+    void localDataDoNotDependOnTheModel() {
+        // every (curve, p) row of curves/tate.csv again after x = u²x' + r, y = u³y' + su²x' + t with pseudo-random
+        // u ∈ {1, 2, 3, 5, 6}, |r|, |s|, |t| ≤ 7: f_p, the Kodaira symbol and c_p are invariants of the curve
+        java.util.Random random = new java.util.Random(20261202);
+        long[] us = {1, 2, 3, 5, 6};
+        List<String> wrong = new ArrayList<>();
+        for (Map<String, String> row : CurveFixtures.rows("tate.csv")) {
+            BigInteger u = BigInteger.valueOf(us[random.nextInt(us.length)]);
+            WeierstrassModel e = CurveFixtures.model(row.get("curve")).scaleUp(u).change(
+                    BigInteger.valueOf(random.nextInt(15) - 7), BigInteger.valueOf(random.nextInt(15) - 7),
+                    BigInteger.valueOf(random.nextInt(15) - 7));
+            LocalReduction local = Tate.reduce(e, new BigInteger(row.get("p")));
+            String got = local.exponent() + " " + local.kodaira() + " " + local.tamagawa();
+            String want = row.get("f") + " " + row.get("kodaira") + " " + row.get("c");
+            if (!got.equals(want)) {
+                wrong.add(row.get("curve") + " u=" + u + " p=" + row.get("p") + ": PARI " + want + ", ours " + got);
+            }
+        }
+        assertEquals(List.of(), wrong.subList(0, Math.min(20, wrong.size())));
+    }
 }
