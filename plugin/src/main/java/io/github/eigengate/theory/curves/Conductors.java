@@ -1,6 +1,7 @@
 package io.github.eigengate.theory.curves;
 
 import io.github.eigengate.arith.WeierstrassModel;
+import io.github.eigengate.theory.Arith;
 import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.List;
@@ -37,13 +38,13 @@ public final class Conductors {
     public static List<Mismatch> against(WeierstrassModel e, long level) {
         List<Mismatch> out = new ArrayList<>();
         TreeSet<Long> primes = new TreeSet<>(List.of(2L, 3L));
-        for (long q : io.github.eigengate.theory.Arith.primeFactors(level)) {
+        for (long q : Arith.primeFactors(level)) {
             primes.add(q);
         }
         BigInteger rest = e.discriminant().abs();
         for (long q : primes) {
             BigInteger bq = BigInteger.valueOf(q);
-            int expected = io.github.eigengate.theory.Arith.valuation(level, q);
+            int expected = Arith.valuation(level, q);
             LocalReduction local = Tate.reduce(e, bq);
             if (local.exponent() != expected) {
                 out.add(new Mismatch(bq, expected, local, null));

@@ -4,6 +4,7 @@ import io.github.eigengate.arith.QPoly;
 import io.github.eigengate.arith.Rational;
 import io.github.eigengate.arith.WeierstrassModel;
 import io.github.eigengate.arith.ZFactorization;
+import io.github.eigengate.theory.Arith;
 import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.List;
@@ -59,7 +60,7 @@ public final class Torsion {
         long g = 0;
         int used = 0;
         for (long p = 3; used < BOUND_PRIMES && g != 1; p += 2) {
-            if (!io.github.eigengate.theory.Arith.isPrime(p)
+            if (!Arith.isPrime(p)
                     || e.discriminant().mod(BigInteger.valueOf(p)).signum() == 0) {
                 continue;
             }

@@ -1,5 +1,6 @@
 package io.github.eigengate.theory.curves;
 
+import io.github.eigengate.theory.Arith;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -23,7 +24,7 @@ public final class Twists {
     public static long discriminant(int[] primes, long[] form, long[] curve, long levelForm, long levelCurve) {
         List<Long> odd = new ArrayList<>();
         for (long n : new long[] {levelForm, levelCurve}) {
-            for (long q : io.github.eigengate.theory.Arith.primeFactors(Math.max(1, n))) {
+            for (long q : Arith.primeFactors(Math.max(1, n))) {
                 if (q != 2 && !odd.contains(q)) {
                     odd.add(q);
                 }
