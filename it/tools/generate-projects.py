@@ -265,3 +265,47 @@ project('character-cell-malformed-fails',
          '[ERROR] data/forms.csv:6:6: error [table-format] form=smallzeta: expected a root of unity of order 6 in the coefficient field (Φ_6(zeta) = 0), found x - 1; Φ_6(zeta) = -2*x + 2 ≠ 0',
          '[ERROR] data/forms.csv:7:3: error [table-format] form=parity: expected an odd weight, found 2; S_k(N, χ) = 0: χ(−1) = −1 but (−1)^k = 1',
          '[ERROR] data/forms.csv:8:4: error [table-format] form=nonunit: expected empty, 1, or g:a/b pairs joined by \';\' with units 1 < g < N that generate (Z/NZ)^×, found 3:1/2;2:1/6; 3 is not a unit g with 1 < g < 21'])
+# ---- elliptic curves beside weight-2 forms (curves.csv)
+# a_n, n <= 20, PARI/GP 2.15.2 (Debian pari-gp + pari-elldata): ellan(ellinit([0,-1,1,-10,-20]), 20) (level 11,
+# also OEIS A006571) and ellan(ellinit([0,0,1,-1,0]), 20) (level 37, the class of rank 1)
+L37_20 = [1, -2, -3, 2, -2, 6, -1, 0, 6, 4, -5, -6, -2, 2, 6, -4, 0, -12, 0, -4]
+FORMS_EC = '# the rational newforms of level 11 and of level 37 (rank 1)\nid,level,weight\nf11,11,2\nf37,37,2\n'
+def coeffs_ec():
+    s = ('# PARI/GP 2.15.2: ellan(ellinit([0,-1,1,-10,-20]), 20) and ellan(ellinit([0,0,1,-1,0]), 20)\n'
+         'form,n,value\n')
+    for i, v in enumerate(L11_20): s += 'f11,%d,%d\n' % (i + 1, v)
+    for i, v in enumerate(L37_20): s += 'f37,%d,%d\n' % (i + 1, v)
+    return s
+def curves_ec(rows):
+    return ('# models from ellsearch (pari-elldata); torsion = elltors(ellinit(curve))[1]\n'
+            'form,curve,torsion\n' + ''.join(rows))
+EC_GOOD = ['f11,"[0,-1,1,-10,-20]",5\n', 'f11,"[0,-1,1,-7820,-263580]",1\n',
+           '# [0,-1,1,-10,-20] after ellchangecurve(E, [1/6, -2, 1, 5]): not minimal at 2 and 3\n',
+           'f11,"[12,-288,2376,-6480,-1959552]",5\n', 'f37,"[0,0,1,-1,0]",1\n']
+project('curves-pass', 'Curves with the right conductor, a_p and torsion pass, a non-minimal model among them.',
+        {'data/forms.csv': FORMS_EC, 'data/coefficients.csv': coeffs_ec(), 'data/curves.csv': curves_ec(EC_GOOD)},
+        ['[INFO] eigengate: 0 errors, 0 warnings, 0 notes in 1 dataset (2 forms, 40 coefficient rows'],
+        fail=False, extra_verify='''def xml = new File(basedir, "target/eigengate/TEST-eigengate.xml").getText("UTF-8")
+assert xml.contains('<testcase classname="eigengate.curve-traces" name="form f11"/>')
+assert xml.contains('<testcase classname="eigengate.curve-conductor" name="form f37"/>')
+''')
+project('curves-twist-fail',
+        'The quadratic twist by -4 of the right curve fails the traces check, which names the twist, and the conductor check (PARI/GP: ellminimalmodel(ellinit(elltwist(ellinit([0,-1,1,-10,-20]), -4))) = [0,1,0,-165,1427], conductor 176).',
+        {'data/forms.csv': FORMS_EC, 'data/coefficients.csv': coeffs_ec(),
+         'data/curves.csv': curves_ec(['f11,"[0,1,0,-165,1427]",\n'])},
+        ['[ERROR] data/curves.csv:3:2: error [curve-traces] form=f11 p=2: expected a_2 = -2 (data/coefficients.csv:4), found a_2 = 0 (the curve); a_p of the curve [0,1,0,-165,1427] must equal a_p of the form (modularity); they differ at 4 of the 8 primes p ≤ 19 of the table; the curve looks like the twist by -4',
+         '[ERROR] data/curves.csv:3:2: error [curve-conductor] form=f11 p=2: expected f_2 = 0 (level 11), found f_2 = 4 (Kodaira II*, c_2 = 1)'])
+project('curves-other-class-fail',
+        'A curve of the right conductor but another isogeny class fails the traces check at p = 2 (PARI/GP: ellap(ellinit([0,1,1,-23,-50]), 2) = 0).',
+        {'data/forms.csv': FORMS_EC, 'data/coefficients.csv': coeffs_ec(),
+         'data/curves.csv': curves_ec(['f37,"[0,1,1,-23,-50]",3\n'])},
+        ['[ERROR] data/curves.csv:3:2: error [curve-traces] form=f37 p=2: expected a_2 = -2 (data/coefficients.csv:24), found a_2 = 0 (the curve); a_p of the curve [0,1,1,-23,-50] must equal a_p of the form (modularity); they differ at 7 of the 8 primes p ≤ 19 of the table',
+         '[ERROR] eigengate: 1 error, 0 warnings, 0 notes in 1 dataset'])
+project('curves-torsion-fail', 'A torsion order from another curve fails (PARI/GP: elltors(ellinit([0,-1,1,-10,-20]))[1] = 5).',
+        {'data/forms.csv': FORMS_EC, 'data/coefficients.csv': coeffs_ec(),
+         'data/curves.csv': curves_ec(['f11,"[0,-1,1,-10,-20]",1\n'])},
+        ['[ERROR] data/curves.csv:3:3: error [curve-torsion] form=f11 torsion: expected 5, found 1; E(Q)_tors of [0,-1,1,-10,-20] has order 5'])
+project('curves-singular-model', 'A singular cubic (discriminant 0) in curves.csv is a table-format error naming file, line and column.',
+        {'data/forms.csv': FORMS_EC, 'data/coefficients.csv': coeffs_ec(),
+         'data/curves.csv': curves_ec(['f11,"[0,0,0,-3,2]",\n'])},
+        ['[ERROR] data/curves.csv:3:2: error [table-format] form=f11: expected a model with nonzero discriminant, found discriminant 0; the cubic [0,0,0,-3,2] is singular (a node or a cusp), not an elliptic curve'])

@@ -18,13 +18,27 @@ import java.util.Set;
  * @param congruences       rows of {@code congruences.csv}
  * @param reducible         rows of {@code reducible.csv}
  * @param weights           rows of {@code modp-weights.csv}
+ * @param curves            rows of {@code curves.csv}
  */
 public record Catalog(Path directory, String display, Map<String, Form> forms, Set<String> rejectedForms,
                       List<SpaceRow> spaces,
                       List<Path> coefficientFiles, List<TableRow> congruences, List<TableRow> reducible,
-                      List<TableRow> weights) {
+                      List<TableRow> weights, List<CurveRow> curves) {
+
+    /** A catalog without curves. */
+    public Catalog(Path directory, String display, Map<String, Form> forms, Set<String> rejectedForms,
+                   List<SpaceRow> spaces, List<Path> coefficientFiles, List<TableRow> congruences,
+                   List<TableRow> reducible, List<TableRow> weights) {
+        this(directory, display, forms, rejectedForms, spaces, coefficientFiles, congruences, reducible, weights,
+                List.of());
+    }
 
     public Form form(String id) {
         return forms.get(id);
+    }
+
+    /** The rows of {@code curves.csv} that name this form, in file order. */
+    public List<CurveRow> curvesOf(String formId) {
+        return curves.stream().filter(c -> c.form().equals(formId)).toList();
     }
 }

@@ -56,8 +56,9 @@ public final class CatalogReader {
                 Tables.REDUCIBLE_OPTIONAL, problems);
         List<TableRow> weights = readRows(directory, display, Tables.WEIGHTS, Tables.WEIGHTS_REQUIRED,
                 Tables.WEIGHTS_OPTIONAL, problems);
+        List<CurveRow> curves = CurveReader.read(directory, display, forms, rejected, problems);
         return new Catalog(directory, display, forms, Set.copyOf(rejected), spaces, shards, congruences, reducible,
-                weights);
+                weights, curves);
     }
 
     static String name(String display, String file) {

@@ -15,6 +15,7 @@ public final class Tables {
     public static final String CONGRUENCES = "congruences.csv";
     public static final String REDUCIBLE = "reducible.csv";
     public static final String WEIGHTS = "modp-weights.csv";
+    public static final String CURVES = "curves.csv";
 
     public static final List<String> FORMS_REQUIRED = List.of("id", "level", "weight");
     public static final List<String> FORMS_OPTIONAL = List.of("character", "field", "zeta");
@@ -28,4 +29,6 @@ public final class Tables {
     public static final List<String> WEIGHTS_REQUIRED = List.of("p");
     public static final List<String> WEIGHTS_OPTIONAL =
             List.of("form", "prime", "local", "serre_weight", "weights", "shape", "exponents");
+    public static final List<String> CURVES_REQUIRED = List.of("form", "curve");
+    public static final List<String> CURVES_OPTIONAL = List.of("torsion");
 }

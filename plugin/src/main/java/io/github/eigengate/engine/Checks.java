@@ -3,6 +3,9 @@ package io.github.eigengate.engine;
 import io.github.eigengate.check.Check;
 import io.github.eigengate.check.congruence.CongruenceCheck;
 import io.github.eigengate.check.congruence.ReducibleCheck;
+import io.github.eigengate.check.curve.CurveConductor;
+import io.github.eigengate.check.curve.CurveTorsion;
+import io.github.eigengate.check.curve.CurveTraces;
 import io.github.eigengate.check.form.FieldSanity;
 import io.github.eigengate.check.form.HeckeRelations;
 import io.github.eigengate.check.form.LevelPrimes;
@@ -33,6 +36,7 @@ public final class Checks {
                 new ReducibleCheck(settings.uncertifiedIsWarning())));
         // the weight checks share the reporting of their table's problems, so they need to know which are skipped
         checks.addAll(WeightChecks.all(settings.skip()));
+        checks.addAll(List.of(new CurveConductor(), new CurveTraces(), new CurveTorsion()));
         return List.copyOf(checks);
     }
 }
