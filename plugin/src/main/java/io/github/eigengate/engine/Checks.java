@@ -9,7 +9,10 @@ import io.github.eigengate.check.form.LevelPrimes;
 import io.github.eigengate.check.form.Normalisation;
 import io.github.eigengate.check.form.RamanujanBound;
 import io.github.eigengate.check.space.SpaceDimension;
+import io.github.eigengate.check.space.SpaceTraceProducts;
+import io.github.eigengate.check.space.SpaceTraceSquares;
 import io.github.eigengate.check.space.SpaceTraces;
+import io.github.eigengate.check.space.SpaceTracesAtLevel;
 import io.github.eigengate.check.weights.WeightChecks;
 import java.util.ArrayList;
 import java.util.List;
@@ -29,6 +32,9 @@ public final class Checks {
                 new LevelPrimes(),
                 new SpaceDimension(),
                 new SpaceTraces(),
+                new SpaceTraceProducts(),
+                new SpaceTraceSquares(),
+                new SpaceTracesAtLevel(),
                 new CongruenceCheck(settings.uncertifiedIsWarning()),
                 new ReducibleCheck(settings.uncertifiedIsWarning())));
         // the weight checks share the reporting of their table's problems, so they need to know which are skipped

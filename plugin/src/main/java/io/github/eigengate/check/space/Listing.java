@@ -1,0 +1,112 @@
+package io.github.eigengate.check.space;
+
+import io.github.eigengate.arith.NumberField;
+import io.github.eigengate.arith.Rational;
+import io.github.eigengate.check.Values;
+import io.github.eigengate.data.Catalog;
+import io.github.eigengate.data.Coefficients;
+import io.github.eigengate.data.Form;
+import io.github.eigengate.data.FormData;
+import io.github.eigengate.data.SourceLocation;
+import io.github.eigengate.data.SpaceKey;
+import io.github.eigengate.data.SpaceRow;
+import java.util.ArrayList;
+import java.util.BitSet;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+
+/**
+ * What the primes-only identities need from the forms of the declared spaces: each form's a_n for n ≤ {@link #CAP}
+ * with their places, kept until every form has been seen. Memory is bounded by CAP values per form.
+ */
+final class Listing {
+
+    /** Identities are checked at indices n ≤ CAP (the trace formula is then cheap: class numbers up to 4·CAP). */
+    static final int CAP = 20_000;
+
+    /** One form: its a_n, n ≤ CAP, and where each was read. */
+    record Entry(Form form, TreeMap<Integer, Object> values, Map<Integer, SourceLocation> at, BitSet given) {
+
+        Object a(int n) {
+            return values.get(n);
+        }
+
+        int degree() {
+            return form.degree();
+        }
+    }
+
+    private final Map<SpaceKey, SpaceRow> declared = new LinkedHashMap<>();
+    private final Map<SpaceKey, List<Entry>> entries = new HashMap<>();
+    private final Catalog catalog;
+
+    Listing(Catalog catalog) {
+        this.catalog = catalog;
+        for (SpaceRow row : catalog.spaces()) {
+            declared.put(row.space(), row);
+        }
+    }
+
+    void add(FormData<?> data) {
+        Form form = data.form();
+        if (!declared.containsKey(form.space())) {
+            return;
+        }
+        Coefficients<?> a = data.coefficients();
+        TreeMap<Integer, Object> values = new TreeMap<>();
+        Map<Integer, SourceLocation> at = new HashMap<>();
+        BitSet given = new BitSet();
+        for (int n : a.indices()) {
+            if (n > CAP) {
+                break;
+            }
+            values.put(n, a.get(n));
+            at.put(n, a.at(n));
+            given.set(n);
+        }
+        entries.computeIfAbsent(form.space(), k -> new ArrayList<>()).add(new Entry(form, values, at, given));
+    }
+
+    /** The declared spaces, in file order. */
+    List<SpaceRow> rows() {
+        return List.copyOf(declared.values());
+    }
+
+    /** The entries of a space when every form it lists has been seen, else {@code null}. */
+    List<Entry> complete(SpaceKey space) {
+        List<Entry> e = entries.get(space);
+        int forms = Spaces.formsOf(catalog, space).size();
+        return e == null || forms == 0 || e.size() != forms ? null : e;
+    }
+
+    /** Whether every entry gives a_n. */
+    static boolean allGive(List<Entry> entries, int n) {
+        for (Entry e : entries) {
+            if (!e.given().get(n)) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /** a·b in the form's field (both values of one form). */
+    static Object multiply(Object a, Object b) {
+        if (a instanceof Rational r && b instanceof Rational s) {
+            return r.multiply(s);
+        }
+        if (a instanceof NumberField.Element x && b instanceof NumberField.Element y) {
+            return x.multiply(y);
+        }
+        NumberField.Element x = a instanceof NumberField.Element e ? e : null;
+        NumberField.Element y = b instanceof NumberField.Element e ? e : null;
+        NumberField k = x != null ? x.field() : y.field();
+        return (x != null ? x : k.fromRational((Rational) a)).multiply(y != null ? y : k.fromRational((Rational) b));
+    }
+
+    static Rational trace(Object a) {
+        return Values.trace(a);
+    }
+}

@@ -1,0 +1,80 @@
+package io.github.eigengate.check.space;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import io.github.eigengate.check.Check;
+import io.github.eigengate.engine.Datasets;
+import io.github.eigengate.engine.Fixture;
+import io.github.eigengate.engine.Gate;
+import io.github.eigengate.engine.Report;
+import io.github.eigengate.engine.Settings;
+import java.nio.file.Path;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * Real data: datasets/primesonly (fixtures-gp/primesonly.gp, PARI/GP 2.15.2) — every newform orbit of 12 spaces
+ * S_k^new(Γ0(N)), given as a_1 and a_p for p ≤ 100 only, with their Atkin–Lehner signs (mfatkineigenvalues).
+ */
+class PrimesOnlyIdentitiesTest {
+
+    @TempDir
+    Path dir;
+
+    private static final Fixture FORMS = Fixture.of("datasets/primesonly/forms.csv");
+    private static final Fixture SPACES = Fixture.of("datasets/primesonly/spaces.csv");
+
+    private List<String> run(Fixture coefficients, Check... checks) {
+        Datasets.write(dir, "forms.csv", FORMS.text(), "spaces.csv", SPACES.text(), "coefficients.csv",
+                coefficients.text());
+        Report r = new Gate(Settings.defaults(), List.of(checks)).run(List.of(new Gate.Dataset(dir, "data")));
+        return Datasets.lines(r);
+    }
+
+    private static Check[] identities() {
+        return new Check[] {new SpaceTraceProducts(), new SpaceTraceSquares(), new SpaceTracesAtLevel()};
+    }
+
+    @Test
+    void cleanPrimesOnlyTablesPass() {
+        assertEquals(List.of(), run(Fixture.of("datasets/primesonly/coefficients.csv"), identities()));
+    }
+
+    @Test
+    void aGaloisConjugateAPIsCaughtAndNamed() {
+        // S_2^new(Γ0(29)) = one orbit over Q(√2): a_2 = x - 1, a_5 = -1, a_7 = 2*x (gp); the conjugate -2*x of a_7 has
+        // the same trace 0 and norm -8, but Tr(a_2 a_7) = Tr(4 - 2*x) = 8 becomes -8; 5*7 still holds (a_5 ∈ Q)
+        Fixture f = Fixture.of("datasets/primesonly/coefficients.csv");
+        assertEquals("2*x", f.valueOf("lev29_wt2_o1", 7));
+        f.plant("lev29_wt2_o1", 7, "-2*x");
+        assertEquals(List.of(), run(f, new SpaceTraces()));
+        assertEquals(List.of("data/coefficients.csv:" + f.lineOf("lev29_wt2_o1", 7) + ": error [space-trace-products] "
+                        + "form=lev29_wt2_o1 n=7: expected 2*x, found -2*x; likely culprit: Σ_f Tr(a_p a_q) = Tr T_pq "
+                        + "fails in space N=29 k=2 at pq = 2*7, 3*7, 7*11, 7*13, 7*17 and 14 more, all involving a_7; "
+                        + "a_7 = 2*x in this form makes every identity at 7 hold (and Σ_f Tr(a_7^2) too); the value "
+                        + "found is σ(2*x) for the automorphism σ: x ↦ -x of K",
+                "data/spaces.csv:9: error [space-trace-products] space=N=29 k=2 pq=2*7: expected Tr T_14 = 8, found Σ "
+                        + "Tr(a_2 a_7) = -8; Σ_f Tr(a_p a_q) = Tr T_pq fails at pq = 2*7, 3*7, 7*11, 7*13, 7*17 and 14 "
+                        + "more of 86 compared: an orbit is missing or listed twice, or an a_p is wrong"),
+                run(f, identities()));
+    }
+
+    @Test
+    void aWrongAtkinLehnerSignInTheAQIsCaught() {
+        // S_4^new(Γ0(13)): o1 rational with w_13 = -1, so a_13 = -w_13·13 = 13 (gp); o2 over Q(√17) with w_13 = +1
+        Fixture f = Fixture.of("datasets/primesonly/coefficients.csv");
+        assertEquals("13", f.valueOf("lev13_wt4_o1", 13));
+        f.plant("lev13_wt4_o1", 13, "-13");
+        assertEquals(List.of("data/coefficients.csv:" + f.lineOf("lev13_wt4_o1", 13) + ": error "
+                        + "[space-traces-at-level] form=lev13_wt4_o1 n=13: expected 13, found -13; likely culprit: a "
+                        + "wrong Atkin–Lehner sign at q = 13 ‖ N; with a_13 = 13 (w_13 of the opposite sign, a_q = "
+                        + "-w_q q^(k/2-1)) the trace of U_13 on N=13 k=4 is right, and no other single form's sign "
+                        + "mends it",
+                "data/spaces.csv:13: error [space-traces-at-level] space=N=13 k=4 n=13: expected Tr T_13 = -13, found "
+                        + "sum of Tr(a_13) = -39; the declared forms' traces differ from the new-space trace at n = 13 "
+                        + "of 1 compared with (n, N) > 1: an orbit is missing or listed twice, or a coefficient (for "
+                        + "n = q ‖ N an Atkin–Lehner sign) is wrong"),
+                run(f, identities()));
+    }
+}
