@@ -18,11 +18,20 @@ import java.util.Set;
  * @param congruences       rows of {@code congruences.csv}
  * @param reducible         rows of {@code reducible.csv}
  * @param weights           rows of {@code modp-weights.csv}
+ * @param atkinLehner       the {@code atkin_lehner} / {@code root_number} cells of {@code forms.csv}, by form id
  */
 public record Catalog(Path directory, String display, Map<String, Form> forms, Set<String> rejectedForms,
                       List<SpaceRow> spaces,
                       List<Path> coefficientFiles, List<TableRow> congruences, List<TableRow> reducible,
-                      List<TableRow> weights) {
+                      List<TableRow> weights, Map<String, AtkinLehnerSigns> atkinLehner) {
+
+    /** A catalog without Atkin–Lehner cells. */
+    public Catalog(Path directory, String display, Map<String, Form> forms, Set<String> rejectedForms,
+                   List<SpaceRow> spaces, List<Path> coefficientFiles, List<TableRow> congruences,
+                   List<TableRow> reducible, List<TableRow> weights) {
+        this(directory, display, forms, rejectedForms, spaces, coefficientFiles, congruences, reducible, weights,
+                Map.of());
+    }
 
     public Form form(String id) {
         return forms.get(id);

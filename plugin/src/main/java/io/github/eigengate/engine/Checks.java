@@ -3,11 +3,13 @@ package io.github.eigengate.engine;
 import io.github.eigengate.check.Check;
 import io.github.eigengate.check.congruence.CongruenceCheck;
 import io.github.eigengate.check.congruence.ReducibleCheck;
+import io.github.eigengate.check.form.AtkinLehner;
 import io.github.eigengate.check.form.FieldSanity;
 import io.github.eigengate.check.form.HeckeRelations;
 import io.github.eigengate.check.form.LevelPrimes;
 import io.github.eigengate.check.form.Normalisation;
 import io.github.eigengate.check.form.RamanujanBound;
+import io.github.eigengate.check.space.AtkinLehnerCount;
 import io.github.eigengate.check.space.SpaceDimension;
 import io.github.eigengate.check.space.SpaceTraceProducts;
 import io.github.eigengate.check.space.SpaceTraceSquares;
@@ -35,6 +37,8 @@ public final class Checks {
                 new SpaceTraceProducts(),
                 new SpaceTraceSquares(),
                 new SpaceTracesAtLevel(),
+                new AtkinLehner(),
+                new AtkinLehnerCount(),
                 new CongruenceCheck(settings.uncertifiedIsWarning()),
                 new ReducibleCheck(settings.uncertifiedIsWarning())));
         // the weight checks share the reporting of their table's problems, so they need to know which are skipped
