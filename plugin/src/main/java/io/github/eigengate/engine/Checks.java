@@ -10,6 +10,7 @@ import io.github.eigengate.check.form.LevelPrimes;
 import io.github.eigengate.check.form.Normalisation;
 import io.github.eigengate.check.form.RamanujanBound;
 import io.github.eigengate.check.space.AtkinLehnerCount;
+import io.github.eigengate.check.space.DuplicateOrbits;
 import io.github.eigengate.check.space.SpaceDimension;
 import io.github.eigengate.check.space.SpaceTraceProducts;
 import io.github.eigengate.check.space.SpaceTraceSquares;
@@ -39,6 +40,7 @@ public final class Checks {
                 new SpaceTracesAtLevel(),
                 new AtkinLehner(),
                 new AtkinLehnerCount(),
+                new DuplicateOrbits(),
                 new CongruenceCheck(settings.uncertifiedIsWarning()),
                 new ReducibleCheck(settings.uncertifiedIsWarning())));
         // the weight checks share the reporting of their table's problems, so they need to know which are skipped

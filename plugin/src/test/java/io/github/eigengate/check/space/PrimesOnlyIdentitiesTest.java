@@ -77,4 +77,24 @@ class PrimesOnlyIdentitiesTest {
                         + "n = q ‖ N an Atkin–Lehner sign) is wrong"),
                 run(f, identities()));
     }
+
+    @Test
+    void anOrbitListedTwiceIsNamed() {
+        // the first form of S_2^new(Γ0(37)) copied under a second id
+        StringBuilder copy = new StringBuilder(Fixture.of("datasets/primesonly/coefficients.csv").text());
+        for (String line : Fixture.of("datasets/primesonly/coefficients.csv").text().split("\n")) {
+            if (line.startsWith("lev37_wt2_o1,")) {
+                copy.append('\n').append(line.replace("lev37_wt2_o1,", "again,"));
+            }
+        }
+        String forms = FORMS.text() + "\nagain,37,2,,,37:-1,+1";
+        Datasets.write(dir, "forms.csv", forms, "coefficients.csv", copy.toString());
+        Report r = new Gate(Settings.defaults(), List.of(new DuplicateOrbits())).run(List.of(new Gate.Dataset(dir,
+                "data")));
+        assertEquals(List.of("data/forms.csv:24: error [duplicate-orbit] form=again: expected a newform differing from "
+                + "lev37_wt2_o1, found the same 26 coefficients as lev37_wt2_o1 (data/forms.csv:15); a duplicated orbit: "
+                + "distinct newforms of one space differ at some a_p (multiplicity one), so again repeats lev37_wt2_o1"),
+                Datasets.lines(r));
+        assertEquals(List.of(), run(Fixture.of("datasets/primesonly/coefficients.csv"), new DuplicateOrbits()));
+    }
 }
