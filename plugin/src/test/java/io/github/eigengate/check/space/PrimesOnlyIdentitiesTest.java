@@ -97,4 +97,26 @@ class PrimesOnlyIdentitiesTest {
                 Datasets.lines(r));
         assertEquals(List.of(), run(Fixture.of("datasets/primesonly/coefficients.csv"), new DuplicateOrbits()));
     }
+
+    @Test
+    void aWrongAPWithTheRightTraceFailsProductsAndSquaresAndIsNamed() {
+        // S_2^new(Γ0(29)) over Q(√2): a_97 = -6*x - 4 (gp); planted -5*x - 4, same trace -8, not a conjugate:
+        // Tr((-5x - 4)^2) = 132 but Tr((-6x - 4)^2) = 176
+        Fixture f = Fixture.of("datasets/primesonly/coefficients.csv");
+        assertEquals("-6*x - 4", f.valueOf("lev29_wt2_o1", 97));
+        f.plant("lev29_wt2_o1", 97, "-5*x - 4");
+        assertEquals(List.of(), run(f, new SpaceTraces()));
+        // Tr(a_2 a_97) = Tr((x - 1)(-6x - 4)) = -16, with the planted value -12; a_5 = -1 is rational, so 5*97 holds
+        assertEquals(List.of("data/coefficients.csv:137: error [space-trace-products] form=lev29_wt2_o1 n=97: expected "
+                        + "-6*x - 4, found -5*x - 4; likely culprit: Σ_f Tr(a_p a_q) = Tr T_pq fails in space N=29 k=2 "
+                        + "at pq = 2*97, 3*97, 7*97, all involving a_97; a_97 = -6*x - 4 in this form makes every "
+                        + "identity at 97 hold (and Σ_f Tr(a_97^2) too)",
+                "data/spaces.csv:9: error [space-trace-products] space=N=29 k=2 pq=2*97: expected Tr T_194 = -16, found "
+                        + "Σ Tr(a_2 a_97) = -12; Σ_f Tr(a_p a_q) = Tr T_pq fails at pq = 2*97, 3*97, 7*97 of 86 "
+                        + "compared: an orbit is missing or listed twice, or an a_p is wrong",
+                "data/spaces.csv:9: error [space-trace-squares] space=N=29 k=2 p=97: expected Tr T_9409 + 97^1·2 = 176, "
+                        + "found Σ Tr(a_97^2) = 132; Σ_f Tr(a_p^2) = Tr T_{p^2} + p^(k-1) dim fails at p = 97 of 24 "
+                        + "compared: an orbit is missing or listed twice, or an a_p is wrong"),
+                run(f, identities()));
+    }
 }
