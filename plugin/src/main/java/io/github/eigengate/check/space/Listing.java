@@ -19,8 +19,9 @@ import java.util.Map;
 import java.util.TreeMap;
 
 /**
- * What the primes-only identities need from the forms of the declared spaces: each form's a_n for n ≤ {@link #CAP}
- * with their places, kept until every form has been seen. Memory is bounded by CAP values per form.
+ * What the primes-only identities need from the forms of the declared spaces: for each form, which a_n with
+ * n ≤ {@link #CAP} are given, and the values (or only their traces) of those a check asks for, with their places,
+ * kept until every form has been seen.
  */
 final class Listing {
 
@@ -42,9 +43,17 @@ final class Listing {
     private final Map<SpaceKey, SpaceRow> declared = new LinkedHashMap<>();
     private final Map<SpaceKey, List<Entry>> entries = new HashMap<>();
     private final Catalog catalog;
+    private final java.util.function.BiPredicate<Integer, Integer> keep;
+    private final boolean tracesOnly;
 
-    Listing(Catalog catalog) {
+    /**
+     * @param keep       (n, N) ↦ whether a_n is kept
+     * @param tracesOnly keep Tr(a_n) ∈ Q instead of a_n (bounded memory for fields of large degree)
+     */
+    Listing(Catalog catalog, java.util.function.BiPredicate<Integer, Integer> keep, boolean tracesOnly) {
         this.catalog = catalog;
+        this.keep = keep;
+        this.tracesOnly = tracesOnly;
         for (SpaceRow row : catalog.spaces()) {
             declared.put(row.space(), row);
         }
@@ -63,9 +72,11 @@ final class Listing {
             if (n > CAP) {
                 break;
             }
-            values.put(n, a.get(n));
-            at.put(n, a.at(n));
             given.set(n);
+            if (keep.test(n, form.level())) {
+                values.put(n, tracesOnly ? trace(a.get(n)) : a.get(n));
+                at.put(n, a.at(n));
+            }
         }
         entries.computeIfAbsent(form.space(), k -> new ArrayList<>()).add(new Entry(form, values, at, given));
     }

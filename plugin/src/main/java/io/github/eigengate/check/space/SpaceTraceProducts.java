@@ -51,7 +51,7 @@ public final class SpaceTraceProducts implements Check {
 
     @Override
     public Pass start(Catalog catalog) {
-        Listing listing = new Listing(catalog);
+        Listing listing = new Listing(catalog, (n, level) -> level % n != 0 && Arith.isPrime(n), false);
         return new Pass() {
             @Override
             public void form(FormData<?> form, FindingSink out) {

@@ -7,6 +7,7 @@ import io.github.eigengate.check.FindingSink;
 import io.github.eigengate.data.Catalog;
 import io.github.eigengate.data.FormData;
 import io.github.eigengate.data.SpaceRow;
+import io.github.eigengate.theory.Arith;
 import io.github.eigengate.theory.spaces.Dimensions;
 import io.github.eigengate.theory.spaces.HurwitzClassNumbers;
 import io.github.eigengate.theory.spaces.NewSpaceTraces;
@@ -39,7 +40,7 @@ public final class SpaceTraceSquares implements Check {
 
     @Override
     public Pass start(Catalog catalog) {
-        Listing listing = new Listing(catalog);
+        Listing listing = new Listing(catalog, (n, level) -> level % n != 0 && Arith.isPrime(n), false);
         return new Pass() {
             @Override
             public void form(FormData<?> form, FindingSink out) {

@@ -40,7 +40,7 @@ public final class SpaceTracesAtLevel implements Check {
 
     @Override
     public Pass start(Catalog catalog) {
-        Listing listing = new Listing(catalog);
+        Listing listing = new Listing(catalog, (n, level) -> Arith.gcd(n, level) > 1, true);
         return new Pass() {
             @Override
             public void form(FormData<?> form, FindingSink out) {
@@ -118,9 +118,9 @@ public final class SpaceTracesAtLevel implements Check {
             return;
         }
         Listing.Entry e = mend.get(0);
-        Object aq = e.a(q);
-        String negated = aq instanceof Rational r ? r.negate().toString()
-                : ((io.github.eigengate.arith.NumberField.Element) aq).negate().toString();
+        // kept as Tr(a_q); a newform's a_q is rational for q ‖ N, so a_q = Tr(a_q)/deg
+        Rational aq = Listing.trace(e.a(q)).divide(Rational.of(e.degree()));
+        String negated = aq.negate().toString();
         out.error(ID, e.at().get(q), io.github.eigengate.check.Subject.form(e.form().id(), "n=" + q), negated,
                 aq.toString(), "likely culprit: a wrong Atkin–Lehner sign at q = " + q + " ‖ N; with a_" + q + " = "
                         + negated + " (w_" + q + " of the opposite sign, a_q = -w_q q^(k/2-1)) the trace of U_" + q
