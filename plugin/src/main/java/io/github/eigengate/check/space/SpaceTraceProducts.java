@@ -25,8 +25,11 @@ import java.util.List;
  * can be checked against: an a_p replaced by a Galois conjugate keeps its own trace but changes Tr(a_p a_q).
  *
  * <p>Compared: q among the first {@link #PARTNERS} primes ∤ N given by every form, p any other prime ∤ N given by
- * every form, pq ≤ {@link Listing#CAP}, and a_pq not given by every form (where it is, {@code space-traces}
- * compares it). Trivial character only (the trace formula's); with χ the identity is the same.
+ * every form; and q any prime dividing N given by every form, with every such p (then pq is not coprime to N and
+ * the new-space trace comes from the old-space decomposition of {@link NewSpaceTraces}; this pins a wrong a_q,
+ * e.g. a wrong Atkin–Lehner sign, to one form). Always pq ≤ {@link Listing#CAP} and a_pq not given by every form
+ * (where it is, {@code space-traces} compares it). Trivial character only (the trace formula's); with χ the
+ * identity is the same.
  *
  * <p>Diagnosis: when a prime r enters every failing identity, for each form f the value y of a_r(f) that makes
  * every identity at r hold is solved for exactly (Tr(y a_s(f)) is linear in the coordinates of y) and checked on
@@ -51,7 +54,7 @@ public final class SpaceTraceProducts implements Check {
 
     @Override
     public Pass start(Catalog catalog) {
-        Listing listing = new Listing(catalog, (n, level) -> level % n != 0 && Arith.isPrime(n), false);
+        Listing listing = new Listing(catalog, (n, level) -> Arith.isPrime(n), false);
         return new Pass() {
             @Override
             public void form(FormData<?> form, FindingSink out) {
@@ -95,6 +98,17 @@ public final class SpaceTraceProducts implements Check {
                 if ((long) p * q <= Listing.CAP && !Listing.allGive(es, p * q)) {
                     pairs.add(new int[] {q, p});
                     maxN = Math.max(maxN, p * q);
+                }
+            }
+        }
+        // q | N: a_p a_q = a_pq still (coprime), and Tr T_pq on the new space is known for (pq, N) > 1 too
+        for (int n : es.get(0).values().keySet()) {
+            if (level % n == 0 && Listing.allGive(es, n)) {
+                for (int p : primes) {
+                    if ((long) p * n <= Listing.CAP && !Listing.allGive(es, p * n)) {
+                        pairs.add(new int[] {Math.min(p, n), Math.max(p, n)});
+                        maxN = Math.max(maxN, p * n);
+                    }
                 }
             }
         }
@@ -184,7 +198,7 @@ public final class SpaceTraceProducts implements Check {
                 if (y == null || y.equals(es.get(f).a(r))) {
                     continue;
                 }
-                if ((long) r * r <= Listing.CAP) {
+                if ((long) r * r <= Listing.CAP && level % r != 0) {
                     BigInteger expected = nt.newTrace(level, (long) r * r).add(BigInteger.valueOf(r).pow(weight - 1)
                             .multiply(BigInteger.valueOf(Dimensions.newforms(level, weight))));
                     Rational s = Rational.ZERO;
@@ -210,7 +224,7 @@ public final class SpaceTraceProducts implements Check {
                 "likely culprit: Σ_f Tr(a_p a_q) = Tr T_pq fails in space " + row.space() + " at pq = "
                         + Diagnosis.list(names) + ", all involving a_" + cr + "; a_" + cr + " = " + cy
                         + " in this form makes every identity at " + cr + " hold"
-                        + ((long) cr * cr <= Listing.CAP ? " (and Σ_f Tr(a_" + cr + "^2) too)" : "")
+                        + ((long) cr * cr <= Listing.CAP && level % cr != 0 ? " (and Σ_f Tr(a_" + cr + "^2) too)" : "")
                         + Diagnosis.conjugateNote(cy, e.a(cr)));
     }
 
