@@ -240,3 +240,13 @@ project('hecke-culprit-named',
         ['[ERROR] data/coefficients.csv:5: error [hecke-relations] form=lev11_wt2_o1 n=2: expected -2, found 2; likely culprit: 2 relations fail, all involve a_2 (n = 6, 10); a_2 = -2 satisfies every relation it enters',
          '[ERROR] data/coefficients.csv:9: error [hecke-relations] form=lev11_wt2_o1 n=6: expected -2, found 2; a_mn = a_m a_n for coprime m=2, n=3, a_2=2, a_3=-1 (Diamond–Shurman Prop. 5.8.5)',
          '[ERROR] data/coefficients.csv:13: error [hecke-relations] form=lev11_wt2_o1 n=10: expected 2, found -2; a_mn = a_m a_n for coprime m=2, n=5, a_2=2, a_5=1 (Diamond–Shurman Prop. 5.8.5)'])
+project('congruence-false-other-twist',
+        'tau(l) = l^3 a_l(f11) mod 5 is false, and the finding says that twist 1 makes it hold (tau(l) = l(1 + l) = l a_l(f11) mod 5).',
+        {'data/forms.csv': FORMS2, 'data/coefficients.csv': coeffs2(),
+         'data/congruences.csv': '# false on purpose: the twist that holds is 1\nform,other,p,twist\ndelta,f11,5,3\n'},
+        ['[ERROR] data/congruences.csv:3: error [congruence] congruence=delta~f11 p=5 j=3: expected a_2(delta) = 2^3*a_2(f11) = 4 mod (5, x) and (5, x), found a_2(delta) = 1; the congruence fails at l = 2, the first prime l not dividing 55 where the residues differ; it holds for every tabulated l <= 12 with twist j = 1 instead (mod (5, x) and (5, x))'])
+f37, c37 = primes_only(['lev37_wt2_o1'])
+c37dup = c37 + '\n'.join(l.replace('lev37_wt2_o1,', 'again,') for l in c37.split('\n') if l.startswith('lev37_wt2_o1,')) + '\n'
+project('duplicate-orbit-named', 'One orbit listed twice under two ids is named as a duplicated orbit.',
+        {'data/forms.csv': f37 + 'again,37,2,,,37:-1,+1\n', 'data/coefficients.csv': c37dup},
+        ['[ERROR] data/forms.csv:4: error [duplicate-orbit] form=again: expected a newform differing from lev37_wt2_o1, found the same 26 coefficients as lev37_wt2_o1 (data/forms.csv:3); a duplicated orbit: distinct newforms of one space differ at some a_p (multiplicity one), so again repeats lev37_wt2_o1'])
