@@ -1,6 +1,9 @@
 package io.github.eigengate.data;
 
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Map;
+import java.util.TreeMap;
 
 /**
  * The optional {@code atkin_lehner} and {@code root_number} cells of a form: w_q = ±1 for every prime q | N (empty
@@ -23,8 +26,8 @@ public record AtkinLehnerSigns(String form, Map<Integer, Integer> signs, SourceL
         if (cell.isEmpty() && root.isEmpty()) {
             return null;
         }
-        java.util.TreeMap<Integer, Integer> signs = new java.util.TreeMap<>();
-        java.util.List<Integer> primes = new java.util.ArrayList<>();
+        TreeMap<Integer, Integer> signs = new TreeMap<>();
+        List<Integer> primes = new ArrayList<>();
         for (int m = level, q = 2; m > 1; q++) {
             if (m % q == 0) {
                 primes.add(q);
@@ -56,7 +59,7 @@ public record AtkinLehnerSigns(String form, Map<Integer, Integer> signs, SourceL
                 }
             }
             if (ok && signs.size() != primes.size()) {
-                java.util.List<Integer> missing = new java.util.ArrayList<>(primes);
+                List<Integer> missing = new ArrayList<>(primes);
                 missing.removeAll(signs.keySet());
                 problems.error(row.at("atkin_lehner"), subject, expected, cell, "no sign for the prime"
                         + (missing.size() > 1 ? "s " : " ") + missing.toString().replaceAll("[\\[\\]]", "")

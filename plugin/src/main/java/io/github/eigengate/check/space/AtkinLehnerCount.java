@@ -76,7 +76,8 @@ public final class AtkinLehnerCount implements Check {
                 continue;
             }
             if (nt == null) {
-                nt = NewSpaceTraces.of(weight, HurwitzClassNumbers.upTo(4L * level + 4));
+                nt = NewSpaceTraces.of(weight, HurwitzClassNumbers.upTo(4L * signs.get(0).signs().keySet().stream()
+                        .mapToInt(Integer::intValue).max().orElse(1) + 4));
             }
             long trace = nt.atkinLehnerTrace(level, q).longValueExact();
             long plus = 0;

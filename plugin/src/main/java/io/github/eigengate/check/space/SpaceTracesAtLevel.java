@@ -4,6 +4,7 @@ import io.github.eigengate.arith.Rational;
 import io.github.eigengate.check.Check;
 import io.github.eigengate.check.Diagnosis;
 import io.github.eigengate.check.FindingSink;
+import io.github.eigengate.check.Subject;
 import io.github.eigengate.data.Catalog;
 import io.github.eigengate.data.FormData;
 import io.github.eigengate.data.SpaceRow;
@@ -121,7 +122,7 @@ public final class SpaceTracesAtLevel implements Check {
         // kept as Tr(a_q); a newform's a_q is rational for q ‖ N, so a_q = Tr(a_q)/deg
         Rational aq = Listing.trace(e.a(q)).divide(Rational.of(e.degree()));
         String negated = aq.negate().toString();
-        out.error(ID, e.at().get(q), io.github.eigengate.check.Subject.form(e.form().id(), "n=" + q), negated,
+        out.error(ID, e.at().get(q), Subject.form(e.form().id(), "n=" + q), negated,
                 aq.toString(), "likely culprit: a wrong Atkin–Lehner sign at q = " + q + " ‖ N; with a_" + q + " = "
                         + negated + " (w_" + q + " of the opposite sign, a_q = -w_q q^(k/2-1)) the trace of U_" + q
                         + " on " + row.space() + " is right, and no other single form's sign mends it");
