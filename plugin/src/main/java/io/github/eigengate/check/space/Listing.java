@@ -81,6 +81,18 @@ final class Listing {
         entries.computeIfAbsent(form.space(), k -> new ArrayList<>()).add(new Entry(form, values, at, given));
     }
 
+    private io.github.eigengate.theory.spaces.HurwitzClassNumbers table;
+
+    /** A class-number table good for traces at every index ≤ n, shared by the spaces of one run (grown on demand). */
+    io.github.eigengate.theory.spaces.HurwitzClassNumbers table(long n) {
+        long need = 4 * Math.max(n, 1) + 4;
+        if (table == null || table.bound() < need) {
+            long size = table == null ? need : Math.max(need, Math.min(2 * table.bound(), 4L * CAP + 4));
+            table = io.github.eigengate.theory.spaces.HurwitzClassNumbers.upTo(size);
+        }
+        return table;
+    }
+
     /** The declared spaces, in file order. */
     List<SpaceRow> rows() {
         return List.copyOf(declared.values());

@@ -12,7 +12,6 @@ import io.github.eigengate.data.FormData;
 import io.github.eigengate.data.SpaceRow;
 import io.github.eigengate.theory.Arith;
 import io.github.eigengate.theory.spaces.Dimensions;
-import io.github.eigengate.theory.spaces.HurwitzClassNumbers;
 import io.github.eigengate.theory.spaces.NewSpaceTraces;
 import java.math.BigInteger;
 import java.util.ArrayList;
@@ -67,7 +66,7 @@ public final class SpaceTraceProducts implements Check {
                     out.examined(ID, Spaces.subject(row.space()));
                     List<Listing.Entry> es = listing.complete(row.space());
                     if (es != null) {
-                        check(row, es, out);
+                        check(row, es, listing, out);
                     }
                 }
             }
@@ -85,7 +84,7 @@ public final class SpaceTraceProducts implements Check {
         return primes;
     }
 
-    private static void check(SpaceRow row, List<Listing.Entry> es, FindingSink out) {
+    private static void check(SpaceRow row, List<Listing.Entry> es, Listing listing, FindingSink out) {
         int level = row.space().level();
         int weight = row.space().weight();
         List<Integer> primes = commonPrimes(es, level);
@@ -115,8 +114,7 @@ public final class SpaceTraceProducts implements Check {
         if (pairs.isEmpty()) {
             return;
         }
-        NewSpaceTraces nt = NewSpaceTraces.of(weight, HurwitzClassNumbers.upTo(4L * Math.max(maxN,
-                square(primes)) + 4));
+        NewSpaceTraces nt = NewSpaceTraces.of(weight, listing.table(Math.max(maxN, square(primes))));
         List<int[]> failing = new ArrayList<>();
         BigInteger firstExpected = null;
         Rational firstFound = null;

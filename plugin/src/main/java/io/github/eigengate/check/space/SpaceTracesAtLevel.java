@@ -9,7 +9,6 @@ import io.github.eigengate.data.Catalog;
 import io.github.eigengate.data.FormData;
 import io.github.eigengate.data.SpaceRow;
 import io.github.eigengate.theory.Arith;
-import io.github.eigengate.theory.spaces.HurwitzClassNumbers;
 import io.github.eigengate.theory.spaces.NewSpaceTraces;
 import java.math.BigInteger;
 import java.util.ArrayList;
@@ -54,14 +53,14 @@ public final class SpaceTracesAtLevel implements Check {
                     out.examined(ID, Spaces.subject(row.space()));
                     List<Listing.Entry> es = listing.complete(row.space());
                     if (es != null) {
-                        check(row, es, out);
+                        check(row, es, listing, out);
                     }
                 }
             }
         };
     }
 
-    private static void check(SpaceRow row, List<Listing.Entry> es, FindingSink out) {
+    private static void check(SpaceRow row, List<Listing.Entry> es, Listing listing, FindingSink out) {
         int level = row.space().level();
         int weight = row.space().weight();
         List<Integer> ns = new ArrayList<>();
@@ -73,7 +72,7 @@ public final class SpaceTracesAtLevel implements Check {
         if (ns.isEmpty()) {
             return;
         }
-        NewSpaceTraces nt = NewSpaceTraces.of(weight, HurwitzClassNumbers.upTo(4L * ns.get(ns.size() - 1) + 4));
+        NewSpaceTraces nt = NewSpaceTraces.of(weight, listing.table(ns.get(ns.size() - 1)));
         List<Integer> failing = new ArrayList<>();
         BigInteger firstExpected = null;
         Rational firstFound = null;
