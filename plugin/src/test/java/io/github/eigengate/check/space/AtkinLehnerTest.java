@@ -96,4 +96,33 @@ class AtkinLehnerTest {
                         + "the level"),
                 run(forms, new AtkinLehner()));
     }
+
+    @Test
+    void aNontrivialCharacterIsNotComparedAndSaysSo() {
+        // χ mod 7 with χ(3) = e^(2πi/3) (order 3): W_7 maps such a form to one with character χ̄, so no sign exists
+        var chi = io.github.eigengate.arith.DirichletCharacter.fromValues(7, new long[] {3}, new long[] {1},
+                new long[] {3});
+        var k = io.github.eigengate.arith.NumberField.of(io.github.eigengate.arith.QPoly.parse("x^2 + x + 1"));
+        var at = io.github.eigengate.data.SourceLocation.row("data/forms.csv", 2);
+        var form = new io.github.eigengate.data.Form("g", 7, 2, k, at, chi);
+        var signs = new io.github.eigengate.data.AtkinLehnerSigns("g", java.util.Map.of(7, 1), at.column(6), 0, at);
+        var catalog = new io.github.eigengate.data.Catalog(dir, "data", java.util.Map.of("g", form), java.util.Set.of(),
+                List.of(), List.of(), List.of(), List.of(), List.of(), java.util.Map.of("g", signs));
+        var a = new io.github.eigengate.data.Coefficients.Builder<io.github.eigengate.arith.NumberField.Element>();
+        a.put(1, k.one(), "data/coefficients.csv", 2);
+        List<String> lines = new java.util.ArrayList<>();
+        new AtkinLehner().check(new io.github.eigengate.data.FormData<>(form, k, a.build(), k.generator()), catalog,
+                new io.github.eigengate.check.FindingSink() {
+                    @Override
+                    public void report(io.github.eigengate.check.Finding finding) {
+                        lines.add(finding.line());
+                    }
+
+                    @Override
+                    public void examined(String check, io.github.eigengate.check.Subject unit) {
+                    }
+                });
+        assertEquals(List.of("data/forms.csv:2:6: note [atkin-lehner] form=g: not checked: the Atkin–Lehner signs are "
+                + "compared for the trivial character only"), lines);
+    }
 }
