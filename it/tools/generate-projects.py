@@ -165,7 +165,8 @@ project('datasets-by-property', 'eigengate.datasets takes comma-separated direct
          'tables-b/forms.csv': FORMS, 'tables-b/coefficients.csv': coeffs(l11=bad),
          'invoker.properties': 'invoker.systemPropertiesFile = test.properties\ninvoker.buildResult = failure\n',
          'test.properties': 'eigengate.datasets = tables-a,tables-b\n'},
-        ['[ERROR] eigengate: 3 errors, 0 warnings, 0 notes in 2 datasets (4 forms, 48 coefficient rows',
+        # a_1 = 2 is one error: the prime-power recursion starts from a_p and a_1 = 1, not from the wrong a_1
+        ['[ERROR] eigengate: 1 error, 0 warnings, 0 notes in 2 datasets (4 forms, 48 coefficient rows',
          '[ERROR] tables-b/coefficients.csv:4: error [normalisation] form=lev11_wt2_o1 n=1: expected 1, found 2'])
 # a_n of the level-11 newform, n <= 20: OEIS A006571; PARI/GP 2.15.2: mfcoefs(mfeigenbasis(mfinit([11,2],0))[1], 20)
 L11_20 = L11 + [4, 4, -1, -4, -2, 4, 0, 2]
@@ -309,3 +310,59 @@ project('curves-singular-model', 'A singular cubic (discriminant 0) in curves.cs
         {'data/forms.csv': FORMS_EC, 'data/coefficients.csv': coeffs_ec(),
          'data/curves.csv': curves_ec(['f11,"[0,0,0,-3,2]",\n'])},
         ['[ERROR] data/curves.csv:3:2: error [table-format] form=f11: expected a model with nonzero discriminant, found discriminant 0; the cubic [0,0,0,-3,2] is singular (a node or a cusp), not an elliptic curve'])
+# ---- primes-only tables (issue: exactness, trace identities, Atkin-Lehner, diagnosis) ----
+# Values: the committed fixture plugin/src/test/resources/datasets/primesonly (fixtures-gp/primesonly.gp, PARI/GP 2.15.2:
+# mfcoefs(mfeigenbasis(mfinit([N,k,1],0))[i], 100) at n = 1 and primes; mfatkineigenvalues; lfunrootres(lfunmf(mf, f))).
+PO = pathlib.Path(__file__).resolve().parent.parent.parent / 'plugin/src/test/resources/datasets/primesonly'
+PO_FORMS = [l for l in (PO / 'forms.csv').read_text().splitlines() if l and not l.startswith('#')]
+PO_COEFFS = [l for l in (PO / 'coefficients.csv').read_text().splitlines() if l and not l.startswith('#')]
+PO_SRC = '# PARI/GP 2.15.2, fixtures-gp/primesonly.gp: a_1 and a_p (p <= 100) of mfeigenbasis(mfinit([N,k,1],0))[i]; atkin_lehner from mfatkineigenvalues, root_number from lfunrootres\n'
+def primes_only(form_ids, plant=None, forms_edit=None):
+    rows = [l for l in PO_COEFFS[1:] if l.split(',')[0] in form_ids]
+    if plant:
+        key = '%s,%d,' % (plant[0], plant[1])
+        rows = [key + '"%s"' % plant[2] if r.startswith(key) else r for r in rows]
+    forms = [PO_FORMS[0]] + [l for l in PO_FORMS[1:] if l.split(',')[0] in form_ids]
+    ftext = PO_SRC + '\n'.join(forms) + '\n'
+    if forms_edit:
+        ftext = ftext.replace(*forms_edit)
+    return ftext, PO_SRC + PO_COEFFS[0] + '\n' + '\n'.join(rows) + '\n'
+def line_of(text, prefix):
+    return [i + 1 for i, l in enumerate(text.split('\n')) if l.startswith(prefix)][0]
+f29, c29 = primes_only(['lev29_wt2_o1'], plant=('lev29_wt2_o1', 7, '-2*x'))
+project('primes-only-conjugate-named',
+        'In a complete space given by a_p only, a_7 replaced by its Galois conjugate (same trace and norm) fails Σ Tr(a_p a_q) = Tr T_pq, and the finding names a_7 and the automorphism.',
+        {'data/forms.csv': f29, 'data/coefficients.csv': c29,
+         'data/spaces.csv': '# S_2^new(Gamma0(29)) is one orbit over Q(sqrt 2): complete\nlevel,weight\n29,2\n'},
+        ['[ERROR] data/coefficients.csv:%d: error [space-trace-products] form=lev29_wt2_o1 n=7: expected 2*x, found -2*x; likely culprit: Σ_f Tr(a_p a_q) = Tr T_pq fails in space N=29 k=2 at pq = 2*7, 3*7, 7*11, 7*13, 7*17 and 14 more, all involving a_7; a_7 = 2*x in this form makes every identity at 7 hold (and Σ_f Tr(a_7^2) too); the value found is σ(2*x) for the automorphism σ: x ↦ -x of K' % line_of(c29, 'lev29_wt2_o1,7,'),
+         '[ERROR] data/spaces.csv:3: error [space-trace-products] space=N=29 k=2 pq=2*7: expected Tr T_14 = 8, found Σ Tr(a_2 a_7) = -8;'])
+f29n, c29n = primes_only(['lev29_wt2_o1'], plant=('lev29_wt2_o1', 97, '1/2*x - 4'))
+project('field-sanity-nonintegral-charpoly',
+        'a_97 = -4 + x/2 in Q(sqrt 2) has an integral trace but is not an algebraic integer: its characteristic polynomial is not in Z[x].',
+        {'data/forms.csv': f29n, 'data/coefficients.csv': c29n},
+        ['[ERROR] data/coefficients.csv:%d: error [field-sanity] form=lev29_wt2_o1 n=97: expected a characteristic polynomial in Z[x], found charpoly(a_n) = x^2 + 8*x + 31/2; a_n is not an algebraic integer: its trace is -8 but its characteristic polynomial over Q has a non-integral coefficient (Cohen GTM 138 §4.3)' % line_of(c29n, 'lev29_wt2_o1,97,')])
+f30, c30 = primes_only(['lev30_wt2_o1'], forms_edit=('lev30_wt2_o1,30,2,,,2:+1;', 'lev30_wt2_o1,30,2,,,2:-1;'))
+project('atkin-lehner-sign-fail',
+        'A wrong Atkin-Lehner sign at 2 || 30 contradicts a_2, the root number and the count of signs in the complete space.',
+        {'data/forms.csv': f30, 'data/coefficients.csv': c30,
+         'data/spaces.csv': '# S_2^new(Gamma0(30)) is one rational orbit: complete\nlevel,weight\n30,2\n'},
+        ['[ERROR] data/coefficients.csv:%d: error [atkin-lehner] form=lev30_wt2_o1 q=2: expected a_2 = 1, found a_2 = -1 with w_2 = -1;' % line_of(c30, 'lev30_wt2_o1,2,'),
+         '[ERROR] data/forms.csv:3:7: error [atkin-lehner] form=lev30_wt2_o1 root_number: expected -1, found +1;',
+         '[ERROR] data/spaces.csv:3: error [atkin-lehner-count] space=N=30 k=2 q=2: expected 1 with w_2 = +1, 0 with -1, found 0 with +1, 1 with -1 (lev30_wt2_o1:-1);'])
+b = list(L11); b[1] = 2
+project('hecke-culprit-named',
+        'a_2 = 2 instead of -2 breaks a_6 and a_10 (a_4 = a_2^2 - 2, a_8 and a_12 do not see the sign); one finding names a_2 with the value that satisfies them all, then the two follow.',
+        {'data/forms.csv': FORMS, 'data/coefficients.csv': coeffs(l11=b)},
+        ['[ERROR] data/coefficients.csv:5: error [hecke-relations] form=lev11_wt2_o1 n=2: expected -2, found 2; likely culprit: 2 relations fail, all involve a_2 (n = 6, 10); a_2 = -2 satisfies every relation it enters',
+         '[ERROR] data/coefficients.csv:9: error [hecke-relations] form=lev11_wt2_o1 n=6: expected -2, found 2; a_mn = a_m a_n for coprime m=2, n=3, a_2=2, a_3=-1 (Diamond–Shurman Prop. 5.8.5)',
+         '[ERROR] data/coefficients.csv:13: error [hecke-relations] form=lev11_wt2_o1 n=10: expected 2, found -2; a_mn = a_m a_n for coprime m=2, n=5, a_2=2, a_5=1 (Diamond–Shurman Prop. 5.8.5)'])
+project('congruence-false-other-twist',
+        'tau(l) = l^3 a_l(f11) mod 5 is false, and the finding says that twist 1 makes it hold (tau(l) = l(1 + l) = l a_l(f11) mod 5).',
+        {'data/forms.csv': FORMS2, 'data/coefficients.csv': coeffs2(),
+         'data/congruences.csv': '# false on purpose: the twist that holds is 1\nform,other,p,twist\ndelta,f11,5,3\n'},
+        ['[ERROR] data/congruences.csv:3: error [congruence] congruence=delta~f11 p=5 j=3: expected a_2(delta) = 2^3*a_2(f11) = 4 mod (5, x) and (5, x), found a_2(delta) = 1; the congruence fails at l = 2, the first prime l not dividing 55 where the residues differ; it holds for every tabulated l <= 12 with twist j = 1 instead (mod (5, x) and (5, x))'])
+f37, c37 = primes_only(['lev37_wt2_o1'])
+c37dup = c37 + '\n'.join(l.replace('lev37_wt2_o1,', 'again,') for l in c37.split('\n') if l.startswith('lev37_wt2_o1,')) + '\n'
+project('duplicate-orbit-named', 'One orbit listed twice under two ids is named as a duplicated orbit.',
+        {'data/forms.csv': f37 + 'again,37,2,,,37:-1,+1\n', 'data/coefficients.csv': c37dup},
+        ['[ERROR] data/forms.csv:4: error [duplicate-orbit] form=again: expected a newform differing from lev37_wt2_o1, found the same 26 coefficients as lev37_wt2_o1 (data/forms.csv:3); a duplicated orbit: distinct newforms of one space differ at some a_p (multiplicity one), so again repeats lev37_wt2_o1'])

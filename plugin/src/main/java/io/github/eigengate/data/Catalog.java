@@ -19,18 +19,19 @@ import java.util.Set;
  * @param reducible         rows of {@code reducible.csv}
  * @param weights           rows of {@code modp-weights.csv}
  * @param curves            rows of {@code curves.csv}
+ * @param atkinLehner       the {@code atkin_lehner} / {@code root_number} cells of {@code forms.csv}, by form id
  */
 public record Catalog(Path directory, String display, Map<String, Form> forms, Set<String> rejectedForms,
                       List<SpaceRow> spaces,
                       List<Path> coefficientFiles, List<TableRow> congruences, List<TableRow> reducible,
-                      List<TableRow> weights, List<CurveRow> curves) {
+                      List<TableRow> weights, List<CurveRow> curves, Map<String, AtkinLehnerSigns> atkinLehner) {
 
-    /** A catalog without curves. */
+    /** A catalog without curves and without Atkin–Lehner cells. */
     public Catalog(Path directory, String display, Map<String, Form> forms, Set<String> rejectedForms,
                    List<SpaceRow> spaces, List<Path> coefficientFiles, List<TableRow> congruences,
                    List<TableRow> reducible, List<TableRow> weights) {
         this(directory, display, forms, rejectedForms, spaces, coefficientFiles, congruences, reducible, weights,
-                List.of());
+                List.of(), Map.of());
     }
 
     public Form form(String id) {

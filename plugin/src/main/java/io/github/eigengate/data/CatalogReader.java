@@ -14,6 +14,7 @@ import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.Set;
 import java.util.stream.Stream;
 
@@ -47,7 +48,8 @@ public final class CatalogReader {
             return null;
         }
         Set<String> rejected = new HashSet<>();
-        Map<String, Form> forms = readForms(formsFile, name(display, Tables.FORMS), problems, rejected);
+        Map<String, AtkinLehnerSigns> signs = new HashMap<>();
+        Map<String, Form> forms = readForms(formsFile, name(display, Tables.FORMS), problems, rejected, signs);
         List<SpaceRow> spaces = readSpaces(directory, display, problems);
         List<Path> shards = coefficientFiles(directory, display, problems);
         List<TableRow> congruences = readRows(directory, display, Tables.CONGRUENCES, Tables.CONGRUENCES_REQUIRED,
@@ -58,14 +60,15 @@ public final class CatalogReader {
                 Tables.WEIGHTS_OPTIONAL, problems);
         List<CurveRow> curves = CurveReader.read(directory, display, forms, rejected, problems);
         return new Catalog(directory, display, forms, Set.copyOf(rejected), spaces, shards, congruences, reducible,
-                weights, curves);
+                weights, curves, Map.copyOf(signs));
     }
 
     static String name(String display, String file) {
         return display.isEmpty() || display.equals(".") ? file : display + "/" + file;
     }
 
-    private static Map<String, Form> readForms(Path file, String display, Problems problems, Set<String> rejected) {
+    private static Map<String, Form> readForms(Path file, String display, Problems problems, Set<String> rejected,
+                                               Map<String, AtkinLehnerSigns> signs) {
         Map<String, Form> forms = new LinkedHashMap<>();
         Map<String, QPolyCache> fields = new HashMap<>();
         CsvTable.of(file, display, Tables.FORMS_REQUIRED, Tables.FORMS_OPTIONAL).read(problems, row -> {
@@ -120,6 +123,9 @@ public final class CatalogReader {
             }
             if (level != null && weight != null && characterOk && fieldOk && zetaOk) {
                 forms.put(id, new Form(id, level, weight, field, row.at(), character, zeta));
+                // the optional Atkin–Lehner cells (AtkinLehnerSigns.read reports their problems)
+                Optional.ofNullable(AtkinLehnerSigns.read(row, id, level, subject, problems))
+                        .ifPresent(s -> signs.put(id, s));
             } else {
                 rejected.add(id);
             }

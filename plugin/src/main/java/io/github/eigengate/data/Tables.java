@@ -18,7 +18,8 @@ public final class Tables {
     public static final String CURVES = "curves.csv";
 
     public static final List<String> FORMS_REQUIRED = List.of("id", "level", "weight");
-    public static final List<String> FORMS_OPTIONAL = List.of("character", "field", "zeta");
+    public static final List<String> FORMS_OPTIONAL = List.of("character", "field", "zeta", "atkin_lehner",
+            "root_number");
     public static final List<String> COEFFICIENTS_REQUIRED = List.of("form", "n", "value");
     public static final List<String> SPACES_REQUIRED = List.of("level", "weight");
     public static final List<String> SPACES_OPTIONAL = List.of("character");

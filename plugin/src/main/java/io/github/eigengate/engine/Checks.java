@@ -6,13 +6,19 @@ import io.github.eigengate.check.congruence.ReducibleCheck;
 import io.github.eigengate.check.curve.CurveConductor;
 import io.github.eigengate.check.curve.CurveTorsion;
 import io.github.eigengate.check.curve.CurveTraces;
+import io.github.eigengate.check.form.AtkinLehner;
 import io.github.eigengate.check.form.FieldSanity;
 import io.github.eigengate.check.form.HeckeRelations;
 import io.github.eigengate.check.form.LevelPrimes;
 import io.github.eigengate.check.form.Normalisation;
 import io.github.eigengate.check.form.RamanujanBound;
+import io.github.eigengate.check.space.AtkinLehnerCount;
+import io.github.eigengate.check.space.DuplicateOrbits;
 import io.github.eigengate.check.space.SpaceDimension;
+import io.github.eigengate.check.space.SpaceTraceProducts;
+import io.github.eigengate.check.space.SpaceTraceSquares;
 import io.github.eigengate.check.space.SpaceTraces;
+import io.github.eigengate.check.space.SpaceTracesAtLevel;
 import io.github.eigengate.check.weights.WeightChecks;
 import java.util.ArrayList;
 import java.util.List;
@@ -32,6 +38,12 @@ public final class Checks {
                 new LevelPrimes(),
                 new SpaceDimension(),
                 new SpaceTraces(),
+                new SpaceTraceProducts(),
+                new SpaceTraceSquares(),
+                new SpaceTracesAtLevel(),
+                new AtkinLehner(),
+                new AtkinLehnerCount(),
+                new DuplicateOrbits(),
                 new CongruenceCheck(settings.uncertifiedIsWarning()),
                 new ReducibleCheck(settings.uncertifiedIsWarning())));
         // the weight checks share the reporting of their table's problems, so they need to know which are skipped

@@ -251,7 +251,8 @@ public final class CongruenceCheck implements Check {
                         "the congruence fails at l = " + worst.failAt + ", the first prime l not dividing "
                                 + product(excluded) + " where the residues differ"
                                 + (matches.size() > 1 ? " (under the identification of residue fields that holds "
-                                + "longest; all " + matches.size() + " identifications fail)" : ""));
+                                + "longest; all " + matches.size() + " identifications fail)" : "")
+                                + alternative(sf, sg, c.primeF, c.primeG, jr, top, excluded));
                 return;
             }
             if (searched) {
@@ -405,6 +406,51 @@ public final class CongruenceCheck implements Check {
             } catch (ArithmeticException e) {
                 return false;
             }
+        }
+
+        /**
+         * Diagnosis of a false claim: "; it holds … with twist j = …" when another twist j mod p − 1 (with the
+         * declared primes) makes the residues agree for every tabulated ℓ ≤ top, or "; it holds … modulo …" when
+         * other primes above p (with the declared twist) do; "" when neither.
+         */
+        private static String alternative(Residues.Store sf, Residues.Store sg, FpPoly primeF, FpPoly primeG,
+                                          long jr, long top, Set<Long> excluded) {
+            long p = sf.p;
+            for (long j = 0; j < p - 1 && p <= 1000; j++) {
+                if (j == jr) {
+                    continue;
+                }
+                for (int kf = 0; kf < sf.primes.size(); kf++) {
+                    if (primeF != null && !sf.primes.get(kf).factor().equals(primeF)) {
+                        continue;
+                    }
+                    for (int kg = 0; kg < sg.primes.size(); kg++) {
+                        if (primeG != null && !sg.primes.get(kg).factor().equals(primeG)) {
+                            continue;
+                        }
+                        for (Match m : compare(sf, kf, sg, kg, j, top, excluded)) {
+                            if (m.failAt == 0) {
+                                return "; it holds for every tabulated l <= " + top + " with twist j = " + j
+                                        + " instead (mod " + m.primes() + ")";
+                            }
+                        }
+                    }
+                }
+            }
+            if (primeF == null && primeG == null) {
+                return "";
+            }
+            for (int kf = 0; kf < sf.primes.size(); kf++) {
+                for (int kg = 0; kg < sg.primes.size(); kg++) {
+                    for (Match m : compare(sf, kf, sg, kg, jr, top, excluded)) {
+                        if (m.failAt == 0) {
+                            return "; it holds for every tabulated l <= " + top + " modulo " + m.primes()
+                                    + " instead";
+                        }
+                    }
+                }
+            }
+            return "";
         }
 
         private static int gcd(int a, int b) {

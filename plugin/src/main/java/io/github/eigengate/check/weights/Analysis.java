@@ -14,6 +14,7 @@ import io.github.eigengate.data.SourceLocation;
 import io.github.eigengate.theory.serre.LocalShape;
 import io.github.eigengate.theory.serre.SerreWeights;
 import io.github.eigengate.theory.serre.Weight;
+import io.github.eigengate.theory.spaces.Dimensions;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.HashMap;
@@ -203,6 +204,17 @@ final class Analysis {
                         row.subject(), "split or nonsplit", local.word(), "très ramifié needs ω^(k−1) = ω and "
                                 + "k ≠ 2 (weight 2 is finite flat), i.e. k = p + 1 = " + (p + 1) + ", but k = " + k
                                 + " (Serre 1987, §2; Edixhoven 1992, §2)"));
+                return null;
+            }
+            if (local == LocalShape.Kind.SPLIT && k <= p - 1 && f.character().isTrivial()
+                    && Dimensions.cuspForms(f.level(), p + 1 - k) == 0) {
+                // Gross 1990 (with Coleman–Voloch 1992): irreducible ρ̄, ordinary and split at p, 2 ≤ k ≤ p − 1, has a
+                // companion eigenform of weight p + 1 − k and level N, which lifts to S_{p+1−k}(Γ0(N)) (Deligne–Serre)
+                formFindings.add(new Finding(WeightOfFormCheck.ID, Severity.ERROR, row.source().at("local"),
+                        row.subject(), "nonsplit (no companion can exist)", local.word(), "split at " + p + " with 2 ≤ k"
+                                + " ≤ p − 1 needs a companion form of weight p + 1 − k = " + (p + 1 - k) + " and level "
+                                + f.level() + " (Gross 1990; Coleman–Voloch 1992), but dim S_" + (p + 1 - k) + "(Γ0("
+                                + f.level() + ")) = 0"));
                 return null;
             }
             kind = local;

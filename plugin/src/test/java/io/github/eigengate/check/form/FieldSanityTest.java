@@ -31,6 +31,60 @@ class FieldSanityTest {
     }
 
     @Test
+    void anIntegralTraceDoesNotMakeAnAlgebraicInteger() {
+        // S_2^new(Γ0(29)), field Q(√2) = Q[x]/(x^2 - 2): a_97 = -6*x - 4 (PARI/GP, fixtures-gp/primesonly.gp). The planted
+        // 1/2*x - 4 (= -4 + x/2) has the same trace -8 but charpoly x^2 + 8x + 31/2, which is not in Z[x].
+        String forms = Fixture.of("datasets/primesonly/forms.csv").text();
+        Fixture clean = Fixture.of("datasets/primesonly/coefficients.csv");
+        assertEquals("-6*x - 4", clean.valueOf("lev29_wt2_o1", 97));
+        assertEquals(List.of(), Datasets.lines(clean.run(dir, forms, new FieldSanity())));
+        Fixture f = Fixture.of("datasets/primesonly/coefficients.csv").plant("lev29_wt2_o1", 97, "1/2*x - 4");
+        assertEquals(List.of("data/coefficients.csv:" + f.lineOf("lev29_wt2_o1", 97) + ": error [field-sanity] "
+                        + "form=lev29_wt2_o1 n=97: expected a characteristic polynomial in Z[x], found charpoly(a_n) = "
+                        + "x^2 + 8*x + 31/2; a_n is not an algebraic integer: its trace is -8 but its characteristic "
+                        + "polynomial over Q has a non-integral coefficient (Cohen GTM 138 §4.3)"),
+                Datasets.lines(f.run(dir, forms, new FieldSanity())));
+    }
+
+    @Test
+    void zetaMustBeAPrimitiveRootOfUnityOfTheCharacterOrder() {
+        // χ mod 7 with χ(3) = e^(2πi/3) has order 3; in K = Q[x]/(x^2 + x + 1) the class of x is a primitive cube
+        // root of unity (x^3 - 1 = (x - 1)(x^2 + x + 1)); 1 is not, nor x + 1 = -x^2 (of order 6).
+        var k = io.github.eigengate.arith.NumberField.of(io.github.eigengate.arith.QPoly.parse("x^2 + x + 1"));
+        var chi = io.github.eigengate.arith.DirichletCharacter.fromValues(7, new long[] {3}, new long[] {1},
+                new long[] {3});
+        var form = new io.github.eigengate.data.Form("g", 7, 2, k,
+                io.github.eigengate.data.SourceLocation.row("data/forms.csv", 2), chi);
+        var a = new io.github.eigengate.data.Coefficients.Builder<io.github.eigengate.arith.NumberField.Element>();
+        a.put(1, k.one(), "data/coefficients.csv", 2);
+        a.put(2, k.generator(), "data/coefficients.csv", 3);
+        assertEquals(List.of(), sanity(new io.github.eigengate.data.FormData<>(form, k, a.build(), k.generator())));
+        assertEquals(List.of("data/forms.csv:2: error [field-sanity] form=g zeta: expected a primitive root of unity "
+                        + "of order 3 in K, found zeta^1 = 1 (zeta = 1); the character has order 3, so its values need "
+                        + "Q(ζ_3) inside the coefficient field through a primitive root of unity"),
+                sanity(new io.github.eigengate.data.FormData<>(form, k, a.build(), k.one())));
+        assertEquals(List.of("data/forms.csv:2: error [field-sanity] form=g zeta: expected a primitive root of unity "
+                        + "of order 3 in K, found zeta^3 = -1 (zeta = x + 1); the character has order 3, so its "
+                        + "values need Q(ζ_3) inside the coefficient field through a primitive root of unity"),
+                sanity(new io.github.eigengate.data.FormData<>(form, k, a.build(), k.generator().add(k.one()))));
+    }
+
+    private static List<String> sanity(io.github.eigengate.data.FormData<?> data) {
+        List<String> lines = new java.util.ArrayList<>();
+        new FieldSanity().check(data, null, new io.github.eigengate.check.FindingSink() {
+            @Override
+            public void report(io.github.eigengate.check.Finding finding) {
+                lines.add(finding.line());
+            }
+
+            @Override
+            public void examined(String check, io.github.eigengate.check.Subject unit) {
+            }
+        });
+        return lines;
+    }
+
+    @Test
     void aFieldLargerThanTheCoefficientsNeedIsAWarning() {
         // The same coefficients written in K = Q[x]/(x^4 - 5), where y = (1 + x^2)/2 is a root of y^2 - y - 1.
         StringBuilder c = new StringBuilder("form,n,value\n");
