@@ -71,6 +71,7 @@ public final class CatalogReader {
                                                Map<String, AtkinLehnerSigns> signs) {
         Map<String, Form> forms = new LinkedHashMap<>();
         Map<String, QPolyCache> fields = new HashMap<>();
+        Map<String, CharacterCell.Parsed> characters = new HashMap<>(); // "N|cell": the walk over (Z/NZ)^× once
         CsvTable.of(file, display, Tables.FORMS_REQUIRED, Tables.FORMS_OPTIONAL).read(problems, row -> {
             String id = row.get("id");
             String subject = "form=" + (id.isEmpty() ? "?" : id);
@@ -87,7 +88,9 @@ public final class CatalogReader {
             DirichletCharacter character = null;
             boolean characterOk = level != null;
             if (level != null) {
-                CharacterCell.Parsed chi = CharacterCell.parse(row.get("character"), level);
+                String cell = row.get("character");
+                CharacterCell.Parsed chi = characters.computeIfAbsent(level + "|" + Cells.compact(cell),
+                        key -> CharacterCell.parse(cell, level));
                 if (chi.ok()) {
                     character = chi.character();
                 } else {

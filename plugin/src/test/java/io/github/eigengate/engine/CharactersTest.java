@@ -141,7 +141,12 @@ class CharactersTest {
      * itself mod 7 at one prime above 7 is certified (one character, p ∤ 13·6, M = 13², B = ⌊2·182/12⌋ = 30); at the
      * two different primes (7, x + 4) and (7, x + 2) above 7 (the roots 3 and 5 of x^2 - x + 1 mod 7, so ζ6 reduces
      * to 3 and to 5) the characters reduce differently and the claim is false; forms with different characters are
-     * not certified.
+     * not certified. A real congruence between weights 2 and 8 with the same character: lev13_wt8_chi6_o1 (the orbit
+     * of degree 14 of S_8(13, χ)) ≡ lev13_wt2_chi6_o1 mod (7, x + 2) and (7, x + 4), where both zetas reduce to 3
+     * (PARI/GP 2.15.2, with fixtures-gp/lib.gp and lib-characters.gp read, B = 150: f = ch_form(13,2,[2],1);
+     * g = ch_form(13,8,[2],1); factormod(g[4], 7) has the factors x + 2 (ζ_g ≡ 3) and x + 4 (ζ_g ≡ 5); every prime
+     * l <= 150, l ≠ 7, 13, has Mod(subst(f[5][l],'x,3),7) == Mod(subst(g[5][l],'x,-2),7)). It is certified (B = ⌊8·182/12⌋
+     * = 121); at (7, x + 4) for g the zetas differ (3 vs 5), so the claim is false.
      */
     @Test
     void congruencesWithACharacter() throws IOException {
@@ -151,13 +156,17 @@ class CharactersTest {
                         "form,other,p,twist,prime,other_prime",
                         "lev13_wt2_chi6_o1,lev13_wt2_chi6_o1,7,0,x + 4,x + 4",
                         "lev13_wt2_chi6_o1,lev13_wt2_chi6_o1,7,0,x + 4,x + 2",
-                        "lev13_wt2_chi6_o1,lev21_wt2_chi6_o1,5,0,,", ""));
+                        "lev13_wt2_chi6_o1,lev21_wt2_chi6_o1,5,0,,",
+                        "lev13_wt2_chi6_o1,lev13_wt8_chi6_o1,7,0,x + 4,x + 2",
+                        "lev13_wt2_chi6_o1,lev13_wt8_chi6_o1,7,0,x + 4,x + 4", ""));
         List<String> lines = Datasets.lines(Datasets.run(dir)).stream().filter(l -> l.contains("[congruence]"))
                 .toList();
         assertEquals(List.of(
                 "data/congruences.csv:2: note [congruence] congruence=lev13_wt2_chi6_o1~lev13_wt2_chi6_o1 p=7: certified: a_l(lev13_wt2_chi6_o1) = l^0*a_l(lev13_wt2_chi6_o1) mod a prime above 7 for every prime l not dividing 91, having checked every l <= B = 30 (f♭ − g♭ (weight 2) on Γ0(169), a_p compared too; Sturm, LNM 1240, Thm 1)",
                 "data/congruences.csv:3: error [congruence] congruence=lev13_wt2_chi6_o1~lev13_wt2_chi6_o1 p=7: expected an identification of residue fields with zeta_lev13_wt2_chi6_o1 = zeta_lev13_wt2_chi6_o1, found none at the primes above 7; the congruence is false: under every choice of primes above 7 the reductions of χ_f and χ_g differ, so det ρ̄_f = (χ_f mod 𝔭)ω^(k_f-1) is not det(ρ̄_g ⊗ ω^j) = (χ_g mod 𝔭)ω^(k_g-1+2j) (Chebotarev, Brauer–Nesbitt)",
-                "data/congruences.csv:4: error [congruence] congruence=lev13_wt2_chi6_o1~lev21_wt2_chi6_o1 p=5: expected a certifiable congruence, found a_l(lev13_wt2_chi6_o1) = l^0*a_l(lev21_wt2_chi6_o1) mod a prime above 5; not certified: the characters of the two forms differ (2:1/6 mod 13, 8:1/2;10:1/6 mod 21): the Sturm-type bound is implemented for one common character only"), lines);
+                "data/congruences.csv:4: error [congruence] congruence=lev13_wt2_chi6_o1~lev21_wt2_chi6_o1 p=5: expected a certifiable congruence, found a_l(lev13_wt2_chi6_o1) = l^0*a_l(lev21_wt2_chi6_o1) mod a prime above 5; not certified: the characters of the two forms differ (2:1/6 mod 13, 8:1/2;10:1/6 mod 21): the Sturm-type bound is implemented for one common character only",
+                "data/congruences.csv:5: note [congruence] congruence=lev13_wt2_chi6_o1~lev13_wt8_chi6_o1 p=7: certified: a_l(lev13_wt2_chi6_o1) = l^0*a_l(lev13_wt8_chi6_o1) mod a prime above 7 for every prime l not dividing 91, having checked every l <= B = 121 (f♭ − g♭ (weights 2, 8, brought to 8 by E_6) on Γ0(169), a_p compared too; Sturm, LNM 1240, Thm 1)",
+                "data/congruences.csv:6: error [congruence] congruence=lev13_wt2_chi6_o1~lev13_wt8_chi6_o1 p=7: expected an identification of residue fields with zeta_lev13_wt2_chi6_o1 = zeta_lev13_wt8_chi6_o1, found none at the primes above 7; the congruence is false: under every choice of primes above 7 the reductions of χ_f and χ_g differ, so det ρ̄_f = (χ_f mod 𝔭)ω^(k_f-1) is not det(ρ̄_g ⊗ ω^j) = (χ_g mod 𝔭)ω^(k_g-1+2j) (Chebotarev, Brauer–Nesbitt)"), lines);
     }
 
     /**

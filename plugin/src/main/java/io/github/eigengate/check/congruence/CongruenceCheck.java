@@ -1,5 +1,6 @@
 package io.github.eigengate.check.congruence;
 
+import io.github.eigengate.arith.DirichletCharacter;
 import io.github.eigengate.arith.FiniteField;
 import io.github.eigengate.arith.FpPoly;
 import io.github.eigengate.check.Certificate;
@@ -9,6 +10,7 @@ import io.github.eigengate.check.Subject;
 import io.github.eigengate.data.Catalog;
 import io.github.eigengate.data.Form;
 import io.github.eigengate.data.TableRow;
+import io.github.eigengate.theory.Arith;
 import io.github.eigengate.theory.congruence.CongruenceBounds;
 import io.github.eigengate.theory.congruence.CongruenceBounds.Plan;
 import java.util.ArrayList;
@@ -121,8 +123,8 @@ public final class CongruenceCheck implements Check {
             }
             int lcm = (int) (f.level() / gcd(f.level(), g.level()) * (long) g.level());
             if ((long) f.level() / gcd(f.level(), g.level()) * g.level()
-                    > io.github.eigengate.arith.DirichletCharacter.MAX_MODULUS) {
-                return "lcm(N_f, N_g) is above " + io.github.eigengate.arith.DirichletCharacter.MAX_MODULUS
+                    > DirichletCharacter.MAX_MODULUS) {
+                return "lcm(N_f, N_g) is above " + DirichletCharacter.MAX_MODULUS
                         + ", where characters are not compared";
             }
             if (!f.character().lift(lcm).equals(g.character().lift(lcm))) {
@@ -142,10 +144,10 @@ public final class CongruenceCheck implements Check {
          */
         private static int depletionLevel(Form h, long p) {
             long n = h.level();
-            for (long[] qe : io.github.eigengate.theory.Arith.factor(h.level())) {
+            for (long[] qe : Arith.factor(h.level())) {
                 long q = qe[0];
                 if (q != p && qe[1] >= 2 && h.character().conductorPart((int) q)
-                        == io.github.eigengate.theory.Arith.powExact(q, (int) qe[1])) {
+                        == Arith.powExact(q, (int) qe[1])) {
                     n *= q;
                 }
             }

@@ -14,7 +14,9 @@ import io.github.eigengate.data.TableRow;
 import io.github.eigengate.theory.congruence.CongruenceBounds;
 import io.github.eigengate.theory.congruence.CongruenceBounds.Plan;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Set;
 
 /**
@@ -120,10 +122,10 @@ public final class ReducibleCheck implements Check {
         }
 
         /** Rows with characters whose determinant fits: compared at the primes in the tables, never certified. */
-        private final java.util.Map<TableRow, DirichletCharacter[]> withCharacters = new java.util.HashMap<>();
+        private final Map<TableRow, DirichletCharacter[]> withCharacters = new HashMap<>();
 
         /** Rows whose ψφ is not the form's character, with the reason. */
-        private final java.util.Map<TableRow, String> characterMismatch = new java.util.HashMap<>();
+        private final Map<TableRow, String> characterMismatch = new HashMap<>();
 
         /**
          * A {@code psi}/{@code phi} cell: a character mod the form's level N in the character-cell syntax (empty =
