@@ -1115,6 +1115,33 @@ public final class TraceFormula {
                 }
                 return tr;
             }
+            if (slots == 2) {
+                long tr = 0;
+                for (int x = 0; x < sc.size[0]; x++) {
+                    int ex = sc.e[0][x];
+                    long cx = sc.c[0][x];
+                    for (int y = 0; y < sc.size[1]; y++) {
+                        int sum = ex + sc.e[1][y];
+                        tr += cx * sc.c[1][y] * ramanujan[sum >= order ? sum - order : sum];
+                    }
+                }
+                return tr;
+            }
+            if (slots == 3) {
+                long tr = 0;
+                for (int x = 0; x < sc.size[0]; x++) {
+                    for (int y = 0; y < sc.size[1]; y++) {
+                        int exy = sc.e[0][x] + sc.e[1][y];
+                        exy = exy >= order ? exy - order : exy;
+                        long cxy = sc.c[0][x] * sc.c[1][y];
+                        for (int z = 0; z < sc.size[2]; z++) {
+                            int sum = exy + sc.e[2][z];
+                            tr += cxy * sc.c[2][z] * ramanujan[sum >= order ? sum - order : sum];
+                        }
+                    }
+                }
+                return tr;
+            }
             return traceFrom(sc, 0, 0, 1);
         }
 
