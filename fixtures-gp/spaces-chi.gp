@@ -1,6 +1,6 @@
 default(parisizemax, 2^30)
 \\ Dataset plugin/src/test/resources/datasets/spaces-chi: every newform orbit of S_k^new(N, chi) for six spaces with a
-\\ character (orders 2, 3, 4, 6; odd weights; two generators), a_n for n <= 100, plus a weight-1 space row.
+\\ character (orders 2, 3, 4, 6; odd weights; two generators), a_n for n <= 100, plus the weight-1 form of level 23.
 \\ Orbit o2 of S_4^new(13, chi of order 3) is written with the conjugate character (and zeta^-1): the gate must see
 \\ it as a form of the same space.
 read("fixtures-gp/lib.gp");
@@ -36,7 +36,11 @@ for (s = 1, #S, my([N, k, a, conj] = S[s], G = znstar(N,1), chi = znconreychar(G
   if (degsum != eulerphi(m) * mfdim([N,k,Mod(a,N)],0), fx_err(Str("degrees ", N, " ", k)));
   my(w = mfcoefs(mftraceform([N,k,Mod(a,N)],0), B));
   for (n = 1, B, if (tr[n] != if (type(w[n+1]) == "t_POLMOD", trace(w[n+1]), eulerphi(m)*w[n+1]), fx_err(Str("trace ", N, " ", k, " n=", n)))));
-my(G = znstar(23,1)); listput(spaces, [23, 1, cell(G, znconreychar(G, 22))]);
+\\ weight 1: the dihedral form of level 23 (rational coefficients); its space row gets notes, never a pass
+my(G = znstar(23,1), E = mfeigenbasis(mfinit([23,1,Mod(22,23)],0)));
+if (#E != 1, fx_err("weight 1, level 23: expected one newform"));
+listput(forms, [Str("chi23_wt1_o1"), 23, 1, cell(G, znconreychar(G, 22)), 0, vector(B, n, mfcoefs(E[1], B)[n+1]), ""]);
+listput(spaces, [23, 1, cell(G, znconreychar(G, 22))]);
 }
 lines = ["a_n for 1 <= n <= 100; newforms of S_k^new(N,chi) from mfeigenbasis(mfinit([N,k,chi],0)), id chi<N>_wt<k>_o<i>", "checked: field degrees add up to [Q(chi):Q]*mfdim and traces to trace(mftraceform([N,k,chi],0)) for n <= 100"];
 {

@@ -150,6 +150,16 @@ project('space-missing-orbit', 'A declared space with an orbit missing fails the
          'data/spaces.csv': '# S_2(Gamma0(11)) and S_2(Gamma0(23)) are complete here; S_2(Gamma0(37)) (dimension 2) is not\nlevel,weight\n11,2\n23,2\n37,2\n'},
         ['[ERROR] data/spaces.csv:5: error [space-dimension] space=N=37 k=2: expected dim S_k^new(Γ0(N)) = 2, found sum of field degrees = 0 (no forms); the declared forms do not fill the new subspace: an orbit is missing (or a field is too small)'],
         extra_verify='assert log.contains("[ERROR] eigengate: 1 error,") : "only the missing space fails"\n')
+# dimensions from the Cohen-Oesterle formula, checked against PARI/GP 2.15.2: mfdim([13,2,Mod(4,13)],0) = 1 for the
+# character 2:1/6 of order 6 (two characters in its Galois orbit); the Legendre symbol mod 7 is odd (7 = 3 mod 4)
+project('space-character-fail', 'spaces.csv rows with characters: a Galois orbit with no forms, a malformed character, a weight of the wrong parity, weight 1.',
+        {'data/forms.csv': FORMS, 'data/coefficients.csv': coeffs(),
+         'data/spaces.csv': '# S_2(Gamma0(11)) is complete; S_2(13, chi of order 6) is not; two malformed rows; weight 1 cannot be checked\nlevel,weight,character\n11,2,\n13,2,2:1/6\n13,4,2:1/5\n7,2,3:1/2\n23,1,5:1/2\n'},
+        ['[ERROR] data/spaces.csv:5:3: error [table-format] space=line 5: expected empty, 1, or g:a/b pairs joined by \';\' with units 1 < g < N that generate (Z/NZ)^×, found 2:1/5; the character cannot be read: the values are not those of a character: two products of the generators equal 1 mod 13 but get different values',
+         '[ERROR] data/spaces.csv:6:2: error [table-format] space=line 6: expected an odd weight (χ(−1) = -1 = (−1)^k), found 2; S_k(N, χ) = 0 unless χ(−1) = (−1)^k, since −I ∈ Γ0(N) acts on it by χ(−1)(−1)^k',
+         '[ERROR] data/spaces.csv:4: error [space-dimension] space=N=13 k=2 χ=2:1/6: expected [Q(χ):Q]·dim S_k^new(N, χ) = 2·1 = 2, found sum of field degrees = 0 (no forms); the declared forms do not fill the new subspace: an orbit is missing (or a field is too small)',
+         '[INFO] data/spaces.csv:7: note [space-dimension] space=N=23 k=1 χ=5:1/2: completeness of weight 1 not checkable: no formula gives dim S_1(N, χ), so the listing is neither passed nor failed'],
+        extra_verify='assert log.contains("[ERROR] eigengate: 3 errors,") : "the complete trivial space passes"\n')
 bad = list(L11); bad[0] = 2
 project('skip-checks-property', 'eigengate.skipChecks turns a check off by its id.',
         {'data/forms.csv': FORMS, 'data/coefficients.csv': coeffs(l11=bad),

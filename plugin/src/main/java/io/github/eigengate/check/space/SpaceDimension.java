@@ -34,7 +34,7 @@ public final class SpaceDimension implements Check {
 
     @Override
     public String title() {
-        return "the field degrees of a declared space's forms add up to dim S_k^new(Γ0(N))";
+        return "the field degrees of a declared space's forms add up to [Q(χ):Q]·dim S_k^new(Γ0(N), χ)";
     }
 
     @Override

@@ -47,7 +47,8 @@ public final class SpaceTraces implements Check {
 
     @Override
     public String title() {
-        return "the traces of a_n over a declared space's forms equal Tr T_n on S_k^new(Γ0(N)), (n, N) = 1";
+        return "the traces of a_n over a declared space's forms equal Tr T_n on S_k^new(Γ0(N), χ) summed over the orbit "
+                + "of χ, (n, N) = 1";
     }
 
     @Override

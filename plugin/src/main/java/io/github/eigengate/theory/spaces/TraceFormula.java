@@ -175,7 +175,7 @@ public final class TraceFormula {
         if (character.isOdd() != ((weight & 1) == 1)) {
             return BigInteger.ZERO;
         }
-        long[] nDivs = Arith.divisors(Arith.factor(n));
+        long[] nDivs = divisorsOf(n);
         return exactDiv24(traceTimes24(level, weight, n, nDivs, false), level.n, weight, n);
     }
 
@@ -199,7 +199,7 @@ public final class TraceFormula {
         if (character.isOdd() != ((weight & 1) == 1)) {
             return BigInteger.ZERO;
         }
-        long[] nDivs = Arith.divisors(Arith.factor(n));
+        long[] nDivs = divisorsOf(n);
         return exactDiv24(newTraceTimes24(weight, n, nDivs), level.n, weight, n);
     }
 
@@ -211,7 +211,7 @@ public final class TraceFormula {
         if (character.isOdd() != ((weight & 1) == 1)) {
             return BigInteger.ZERO;
         }
-        long[] nDivs = Arith.divisors(Arith.factor(n));
+        long[] nDivs = divisorsOf(n);
         BigInteger sum = BigInteger.ZERO;
         for (int i = 0; i < divisorLevels.length; i++) {
             Level m = divisorLevels[i];
@@ -227,8 +227,29 @@ public final class TraceFormula {
         if (character.isOdd() != ((weight & 1) == 1)) {
             return BigInteger.ZERO;
         }
-        long[] nDivs = Arith.divisors(Arith.factor(n));
+        long[] nDivs = divisorsOf(n);
         return exactDiv24(traceTimes24(level, weight, n, nDivs, true), level.n, weight, n);
+    }
+
+    /** The divisors of n, factoring by a shared smallest-prime-factor table (one per run, not per n). */
+    private long[] divisorsOf(long n) {
+        int[] spf = Arith.sharedSmallestPrimeFactors((int) Math.min(Integer.MAX_VALUE - 1, table.bound() / 4 + 1));
+        if (n >= spf.length) {
+            return Arith.divisors(Arith.factor(n));
+        }
+        long[][] f = new long[16][];
+        int k = 0;
+        int m = (int) n;
+        while (m > 1) {
+            int p = spf[m];
+            int e = 0;
+            while (m % p == 0) {
+                m /= p;
+                e++;
+            }
+            f[k++] = new long[] {p, e};
+        }
+        return Arith.divisors(Arrays.copyOf(f, k));
     }
 
     private void checkArgs(int weight, long n) {
@@ -1094,6 +1115,33 @@ public final class TraceFormula {
                 }
                 return tr;
             }
+            if (slots == 2) {
+                long tr = 0;
+                for (int x = 0; x < sc.size[0]; x++) {
+                    int ex = sc.e[0][x];
+                    long cx = sc.c[0][x];
+                    for (int y = 0; y < sc.size[1]; y++) {
+                        int sum = ex + sc.e[1][y];
+                        tr += cx * sc.c[1][y] * ramanujan[sum >= order ? sum - order : sum];
+                    }
+                }
+                return tr;
+            }
+            if (slots == 3) {
+                long tr = 0;
+                for (int x = 0; x < sc.size[0]; x++) {
+                    for (int y = 0; y < sc.size[1]; y++) {
+                        int exy = sc.e[0][x] + sc.e[1][y];
+                        exy = exy >= order ? exy - order : exy;
+                        long cxy = sc.c[0][x] * sc.c[1][y];
+                        for (int z = 0; z < sc.size[2]; z++) {
+                            int sum = exy + sc.e[2][z];
+                            tr += cxy * sc.c[2][z] * ramanujan[sum >= order ? sum - order : sum];
+                        }
+                    }
+                }
+                return tr;
+            }
             return traceFrom(sc, 0, 0, 1);
         }
 
@@ -1105,7 +1153,8 @@ public final class TraceFormula {
             int[] e = sc.e[s];
             long[] c = sc.c[s];
             for (int x = 0; x < sc.size[s]; x++) {
-                tr += traceFrom(sc, s + 1, (exponent + e[x]) % order, coefficient * c[x]);
+                int sum = exponent + e[x]; // both in [0, order)
+                tr += traceFrom(sc, s + 1, sum >= order ? sum - order : sum, coefficient * c[x]);
             }
             return tr;
         }

@@ -57,7 +57,9 @@ class SpaceCharacterDatasetTest {
         Report r = run(read("forms.csv"), read("coefficients.csv"));
         assertEquals(List.of("data/spaces.csv:" + spaceLine("23,1,") + ": note [space-dimension] space=N=23 k=1 "
                 + "χ=5:1/2: completeness of weight 1 not checkable: no formula gives dim S_1(N, χ), so the listing is "
-                + "neither passed nor failed"), Datasets.lines(r));
+                + "neither passed nor failed", "data/spaces.csv:" + spaceLine("23,1,") + ": note [space-traces] "
+                + "space=N=23 k=1 χ=5:1/2: traces of weight 1 not checkable: the trace formula needs k >= 2, so the coefficients are neither passed nor "
+                + "failed here"), Datasets.lines(r));
     }
 
     @Test
@@ -66,7 +68,7 @@ class SpaceCharacterDatasetTest {
                 "chi13_wt4_o2,"));
         List<String> lines = Datasets.lines(r);
         int at = spaceLine("13,4,");
-        assertEquals(3, lines.size(), String.join("\n", lines));
+        assertEquals(4, lines.size(), String.join("\n", lines)); // and the two weight-1 notes
         assertEquals("data/spaces.csv:" + at + ": error [space-dimension] space=N=13 k=4 χ=2:1/3: expected "
                 + "[Q(χ):Q]·dim S_k^new(N, χ) = 2·3 = 6, found sum of field degrees = 2 (chi13_wt4_o1:2); the declared "
                 + "forms do not fill the new subspace: an orbit is missing (or a field is too small)", lines.get(0));
