@@ -79,8 +79,10 @@ final class Collector implements FindingSink, Problems {
     @Override
     public void examined(String check, Subject unit) {
         examined.computeIfAbsent(check, k -> new LinkedHashSet<>()).add(unitOf(unit));
-        examinedIn.computeIfAbsent(dataset, k -> new LinkedHashMap<>())
-                  .computeIfAbsent(check, k -> new LinkedHashSet<>()).add(unitOf(unit));
+        if (!dataset.isEmpty()) {
+            examinedIn.computeIfAbsent(dataset, k -> new LinkedHashMap<>())
+                      .computeIfAbsent(check, k -> new LinkedHashSet<>()).add(unitOf(unit));
+        }
     }
 
     @Override

@@ -76,7 +76,7 @@ final class Assets {
             .eg-tag-cm { color: var(--note); border-color: var(--note); }
             .eg-tag-bad { color: var(--bad); border-color: var(--bad); }
             .eg-plots { display:flex; flex-wrap: wrap; gap: 14px; }
-            figure { margin: 6px 0 0; }
+            figure { margin: 6px 0 0; width: 442px; }
             figcaption { font-size: 12.5px; color: var(--muted); }
             svg.eg-plot { background: #fcfbf8; border: 1px solid #e4dfd2; }
             .eg-band { fill: var(--band); }

@@ -13,9 +13,10 @@ import java.util.List;
  * @param values       values[e][i] is x_p for primes[i] under the e-th real embedding
  * @param zeros        how many of the plotted a_p are exactly 0
  * @param note         why nothing is plotted (no real embedding, …), or ""
+ * @param roots        the image of the field's generator x under each real embedding (empty for Q)
  */
 public record FormSeries(String dataset, int datasetIndex, int formIndex, String id, int level, int weight, int degree,
-                  long[] primes, double[][] values, int zeros, String note) {
+                  long[] primes, double[][] values, int zeros, String note, double[] roots) {
 
     /** Fewer primes than this are too few to tell a vanishing half from chance. */
     static final int CM_MIN_PRIMES = 8;

@@ -37,8 +37,8 @@ public final class HtmlReport {
         body.add(nav());
         body.add(counts(r, titles, m));
         body.add(findings(r, m));
-        body.add(checks(r, titles, m));
         body.add(formsSection(m));
+        body.add(checks(r, titles, m));
         body.add(spaces(r, m));
         body.add(congruences(r, m));
         body.add(Html.el("footer").text("Eigengate: every verdict above comes from exact arithmetic and a published "
@@ -140,7 +140,7 @@ public final class HtmlReport {
 
     private static Html nav() {
         Html nav = Html.el("nav").cls("eg-nav");
-        String[][] items = {{"counts", "Counts"}, {"findings", "Findings"}, {"checks", "Checks"}, {"forms", "Forms"},
+        String[][] items = {{"counts", "Counts"}, {"findings", "Findings"}, {"forms", "Forms"}, {"checks", "Checks"},
                 {"spaces", "Spaces"}, {"congruences", "Congruences"}};
         for (String[] it : items) {
             nav.add(Html.el("a").attr("href", "#" + it[0]).text(it[1]));
@@ -359,8 +359,14 @@ public final class HtmlReport {
                 a.add(Html.el("p", "eg-none", s.note().isEmpty() ? "no a_p at primes p ∤ N in the tables" : s.note()));
             } else {
                 Html plots = Html.el("div").cls("eg-plots");
-                plots.add(Html.el("figure").add(Plots.scatter(s, flagged)).add(Html.el("figcaption").text(
-                        "x_p against p" + (flagged.isEmpty() ? "" : "; flagged: " + joinFlagged(flagged, s)))));
+                Html cap = Html.el("figcaption").text("x_p against p" + (flagged.isEmpty() ? ""
+                        : "; " + joinFlagged(flagged, s)));
+                for (int e = 0; e < s.roots().length; e++) {
+                    cap.add(Html.el("br")).add(Html.el("span", "eg-swatch", "●")
+                            .attr("style", "color:" + Plots.EMBEDDING_COLOURS[e % Plots.EMBEDDING_COLOURS.length]))
+                            .text(" embedding x ↦ " + String.format(java.util.Locale.ROOT, "%.6f", s.roots()[e]));
+                }
+                plots.add(Html.el("figure").add(Plots.scatter(s, flagged)).add(cap));
                 plots.add(Html.el("figure").add(Plots.histogram(s)).add(Html.el("figcaption").text(s.looksCm()
                         ? "CM distribution: half the mass at 0, the rest with density (1/π)/√(1−x²)"
                         : "Sato–Tate density (2/π)√(1−x²)")));
@@ -380,13 +386,23 @@ public final class HtmlReport {
         return sec;
     }
 
+    /** The flagged primes, and how many flagged n are not plotted (composite, or dividing N). */
     private static String joinFlagged(Set<Long> flagged, FormSeries s) {
         Set<Long> plotted = new LinkedHashSet<>(s.primeList());
-        List<String> parts = new ArrayList<>();
+        List<String> primes = new ArrayList<>();
+        int other = 0;
         for (long n : flagged) {
-            parts.add((plotted.contains(n) ? "p=" : "n=") + n + (plotted.contains(n) ? "" : " (not plotted)"));
+            if (plotted.contains(n)) {
+                primes.add("p=" + n);
+            } else {
+                other++;
+            }
         }
-        return String.join(", ", parts);
+        String out = primes.isEmpty() ? "" : "flagged " + String.join(", ", primes);
+        if (other > 0) {
+            out += (out.isEmpty() ? "" : "; ") + other + " flagged n not plotted (composite or dividing N)";
+        }
+        return out;
     }
 
     private static Html spaces(Report r, Model m) {

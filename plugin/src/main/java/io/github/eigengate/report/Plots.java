@@ -20,7 +20,7 @@ final class Plots {
     /** Samples of the density curve across [−1, 1]. */
     static final int CURVE_SAMPLES = 81;
 
-    private static final String[] EMBEDDING_COLOURS = {"#2f6f8f", "#7a5c99", "#3f8a4f", "#a06a2c", "#5b6b7a"};
+    static final String[] EMBEDDING_COLOURS = {"#2f6f8f", "#8a4f9e", "#3f8a4f", "#a06a2c", "#5b6b7a"};
 
     private Plots() {
     }
@@ -194,10 +194,10 @@ final class Plots {
     /** About five round tick values in (0, max]. */
     static List<Long> ticks(long max) {
         long step = 1;
-        for (long decade = 1; max / step > 6; decade *= 10) {
+        for (long decade = 1; max / step > 8; decade *= 10) {
             for (long m : new long[] {1, 2, 5}) {
                 step = decade * m;
-                if (max / step <= 6) {
+                if (max / step <= 8) {
                     break;
                 }
             }

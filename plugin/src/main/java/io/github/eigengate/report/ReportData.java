@@ -120,7 +120,7 @@ public final class ReportData implements Observer {
             }
         }
         return new FormSeries(dataset, setIndex, formIndex, f.id(), f.level(), f.weight(), f.degree(), ps, values,
-                zeros, note);
+                zeros, note, f.rational() ? new double[0] : roots.clone());
     }
 
     private static List<Rational> coordinates(Object ap) {
