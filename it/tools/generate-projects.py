@@ -73,7 +73,7 @@ project('clean-dataset-passes', 'True coefficients pass; reports are written.', 
         fail=False, extra_verify='''def json = new File(basedir, "target/eigengate/report.json").getText("UTF-8")
 assert json.contains('"passed": true')
 def xml = new File(basedir, "target/eigengate/TEST-eigengate.xml").getText("UTF-8")
-assert xml.contains('<testcase classname="eigengate.normalisation" name="form lev11_wt2_o1"/>')
+assert xml.contains('<testcase classname="eigengate.normalisation" name="data: form lev11_wt2_o1"/>')
 ''')
 project('skip-property-skips', 'eigengate.skip skips even a broken dataset.', {'data/forms.csv': 'id,level\n'},
         ['[INFO] eigengate: skipped'], fail=False, config='\n        <configuration><skip>true</skip></configuration>')
@@ -82,7 +82,7 @@ project('normalisation-fail', 'a_1 = 2 fails the normalisation check, naming fil
         {'data/forms.csv': FORMS, 'data/coefficients.csv': coeffs(l11=bad)},
         ['[ERROR] data/coefficients.csv:4: error [normalisation] form=lev11_wt2_o1 n=1: expected 1, found 2; a newform is normalised so that a_1 = 1'],
         extra_verify='''def xml = new File(basedir, "target/eigengate/TEST-eigengate.xml").getText("UTF-8")
-assert xml.contains('<testcase classname="eigengate.normalisation" name="form lev11_wt2_o1">')
+assert xml.contains('<testcase classname="eigengate.normalisation" name="data: form lev11_wt2_o1">')
 assert xml.contains('<failure message="data/coefficients.csv:4: error [normalisation]')
 def json = new File(basedir, "target/eigengate/report.json").getText("UTF-8")
 assert json.contains('"check": "normalisation", "severity": "error", "file": "data/coefficients.csv", "line": 4')
