@@ -54,6 +54,7 @@ final class Assets {
                         font-size: 12.5px; }
             .eg-value { max-width: 240px; overflow-wrap: anywhere; }
             .eg-reason { color: #3a403f; }
+            .eg-findings td:nth-child(3), .eg-findings td:nth-child(4) { white-space: nowrap; }
             .eg-filters { display:flex; gap: 16px; align-items:center; padding: 8px 10px; margin-bottom: 8px;
                           background:#ece8dc; border:1px solid var(--rule); border-radius: 4px; font-size: 13.5px; }
             .eg-filters select { font: inherit; padding: 2px 4px; }
@@ -97,7 +98,10 @@ final class Assets {
             [hidden] { display: none !important; }
             """;
 
-    /** Shows the filter bar and hides the rows, check cards and form cards the chosen filters exclude. */
+    /**
+     * Shows the filter bar and hides the rows, check cards and form cards the chosen filters exclude. A link ending
+     * in {@code #only:check=…&severity=…&form=…} opens the page so filtered, and the bar keeps the address in step.
+     */
     static final String SCRIPT = """
             (function () {
               var box = document.getElementById('eg-filters');
@@ -121,8 +125,23 @@ final class Assets {
                 if (n) { n.textContent = shown + ' of ' + document.querySelectorAll('tr.eg-finding').length
                          + ' findings shown'; }
               };
-              box.addEventListener('change', apply);
-              box.addEventListener('reset', function () { setTimeout(apply, 0); });
+              var remember = function () {
+                var parts = [];
+                ['check', 'severity', 'form'].forEach(function (k) {
+                  if (pick(k).value) { parts.push(k + '=' + encodeURIComponent(pick(k).value)); }
+                });
+                try { history.replaceState(null, '', parts.length ? '#only:' + parts.join('&') : '#findings'); }
+                catch (e) { /* a file:// page may refuse; the filters still work */ }
+              };
+              var hash = location.hash || '';
+              if (hash.indexOf('#only:') === 0) {
+                hash.slice(6).split('&').forEach(function (kv) {
+                  var i = kv.indexOf('='), sel = pick(kv.slice(0, i));
+                  if (sel) { sel.value = decodeURIComponent(kv.slice(i + 1)); }
+                });
+              }
+              box.addEventListener('change', function () { apply(); remember(); });
+              box.addEventListener('reset', function () { setTimeout(function () { apply(); remember(); }, 0); });
               apply();
             })();
             """;

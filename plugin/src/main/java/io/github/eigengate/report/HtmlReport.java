@@ -493,7 +493,8 @@ public final class HtmlReport {
         Map<String, Map<String, String>> out = new LinkedHashMap<>();
         for (Measure x : ms) {
             if (x.check().equals(check)) {
-                out.computeIfAbsent(x.dataset() + "\u0000" + x.unit(), k -> new LinkedHashMap<>())
+                String shown = x.unit().kind().equals("space") ? x.unit().name() : x.unit().toString();
+                out.computeIfAbsent(x.dataset() + "\u0000" + shown, k -> new LinkedHashMap<>())
                         .put(x.quantity(), x.value());
             }
         }

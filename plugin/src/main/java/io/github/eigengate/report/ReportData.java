@@ -63,6 +63,13 @@ public final class ReportData implements Observer {
         };
     }
 
+    /** For tests of the ordering: forms as if they had arrived in this order. */
+    void addAllForTest(List<FormSeries> arrived) {
+        synchronized (series) {
+            series.addAll(arrived);
+        }
+    }
+
     /** The forms seen, by dataset and then forms.csv order. */
     public List<FormSeries> forms() {
         synchronized (series) {
