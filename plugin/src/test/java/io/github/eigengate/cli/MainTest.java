@@ -208,7 +208,7 @@ class MainTest {
         p.end();
         assertTrue(p.line().startsWith("eigengate: 450 rows read, 3 forms checked, "), p.line());
         String shown = err.toString(StandardCharsets.UTF_8);
-        assertTrue(shown.contains("\reigengate: 450 rows read, 3 forms checked, "), shown);
+        assertTrue(shown.contains("\r\033[Keigengate: 450 rows read, 3 forms checked, "), shown);
         assertTrue(shown.endsWith("\r\033[K"), "the line is cleared at the end");
 
         ByteArrayOutputStream quiet = new ByteArrayOutputStream();
