@@ -28,7 +28,7 @@ POM='''<?xml version="1.0" encoding="UTF-8"?>
         </executions>%(config)s
       </plugin>
     </plugins>
-  </build>
+  </build>%(reporting)s
 </project>
 '''
 # a_n of the weight-2 newform of level 11, n = 1..12: OEIS A006571; also computed with PARI/GP 2.15.2 (Debian pari-gp):
@@ -45,10 +45,10 @@ def coeffs(l11=L11, l23=L23, extra=''):
     for i,v in enumerate(l11): s += 'lev11_wt2_o1,%d,%s\n' % (i+1, v)
     for i,v in enumerate(l23): s += 'lev23_wt2_o1,%d,%s\n' % (i+1, ('"%s"' % v) if ',' in v else v)
     return s + extra
-def project(name, desc, files, expect, fail=True, config='', extra_verify=''):
+def project(name, desc, files, expect, fail=True, config='', extra_verify='', reporting=''):
     d = os.path.join(root, name)
     os.makedirs(d, exist_ok=True)
-    open(os.path.join(d,'pom.xml'),'w').write(POM % dict(name=name, desc=desc.replace('&', '&amp;').replace('<', '&lt;').replace('>', '&gt;'), config=config))
+    open(os.path.join(d,'pom.xml'),'w').write(POM % dict(name=name, desc=desc.replace('&', '&amp;').replace('<', '&lt;').replace('>', '&gt;'), config=config, reporting=reporting))
     for fn, content in files.items():
         p = os.path.join(d, fn)
         os.makedirs(os.path.dirname(p), exist_ok=True)
@@ -186,9 +186,68 @@ project('congruence-certified-with-certificate',
         fail=False, extra_verify='''def cert = new File(basedir, "target/eigengate/certificates/congruence-delta-f11-p11.txt").getText("UTF-8")
 assert cert.contains("bound B = floor(W*index/12): 12") : cert
 assert cert.contains("sha256 ") && cert.contains("  coefficients.csv") : cert
+assert cert.contains("  congruences.csv") : "the claim file is hashed too: " + cert
 ''')
 project('weight-set-missing-weight',
         'A predicted weight set that drops a Serre weight fails, naming form, p and the missing weight (level 11 is supersingular at 19: a_19 = 0).',
         {'data/forms.csv': FORMS2, 'data/coefficients.csv': coeffs2(),
          'data/modp-weights.csv': 'form,p,serre_weight,weights\nf11,19,2,"(0,0)"\n'},
         ['[ERROR] data/modp-weights.csv:2:4: error [weight-set] form=f11 p=19: expected (0,0);(18,0), found (0,0); missing (18,0);'])
+
+# --- issue 11: the HTML report, failOnError / failOnWarning, the help goal, the site page
+b = list(L11); b[5] = '-2'
+project('html-report-of-failing-dataset', 'A failing run writes report.html: the verdict, the finding by anchor, a plot per form.',
+        {'data/forms.csv': FORMS, 'data/coefficients.csv': coeffs(l11=b)},
+        ['[ERROR] data/coefficients.csv:9: error [hecke-relations] form=lev11_wt2_o1 n=6: expected 2, found -2;',
+         'full report in target/eigengate/report.html'],
+        extra_verify='''def html = new File(basedir, "target/eigengate/report.html").getText("UTF-8")
+assert html.startsWith("<!DOCTYPE html>")
+assert html.contains('<h1 id="verdict" class="eg-verdict">') && html.contains("Failing: 1 error in the tables")
+assert html.contains('<tr id="finding-1" class="eg-finding eg-row-error" data-check="hecke-relations"')
+assert (html =~ /<svg [^>]*class="eg-plot eg-scatter"/).size() == 2 : "one plot per form"
+assert !html.contains("<link") && !html.contains("src=") : "self-contained"
+''')
+bad = list(L11); bad[0] = 2
+project('fail-on-error-false-reports-only', 'failOnError=false reports the errors and writes the reports but lets the build pass.',
+        {'data/forms.csv': FORMS, 'data/coefficients.csv': coeffs(l11=bad),
+         'invoker.properties': 'invoker.goals = verify -Deigengate.failOnError=false\ninvoker.buildResult = success\n'},
+        ['[ERROR] data/coefficients.csv:4: error [normalisation] form=lev11_wt2_o1 n=1: expected 1, found 2',
+         '[WARNING] eigengate: failOnError is false: the build goes on despite 3 errors (listed above; full report in target/eigengate/report.html)'],
+        fail=False)
+FORMS_EXTRA = FORMS.replace('id,level,weight,character,field', 'id,level,weight,character,field,remark').replace(',x^2 - x - 1', ',x^2 - x - 1,').replace('lev11_wt2_o1,11,2,,', 'lev11_wt2_o1,11,2,,,')
+project('fail-on-warning-fails-on-a-warning', 'failOnWarning=true fails the build on a warning (here: an unknown column).',
+        {'data/forms.csv': FORMS_EXTRA, 'data/coefficients.csv': coeffs(),
+         'invoker.properties': 'invoker.goals = verify -Deigengate.failOnWarning=true\ninvoker.buildResult = failure\n'},
+        ['[INFO] eigengate: 0 errors, 1 warning, 0 notes in 1 dataset',
+         'eigengate: 0 errors and 1 warning in the data (listed above; full report in target/eigengate/report.html); failOnWarning is set'])
+project('help-goal-lists-goals', 'mvn eigengate:help (prefix from the plugin in the pom) lists the goals check, report and help.',
+        {'data/forms.csv': FORMS, 'data/coefficients.csv': coeffs(),
+         'invoker.properties': 'invoker.goals = eigengate:help -Ddetail=false\ninvoker.buildResult = success\n'},
+        ['eigengate:check', 'eigengate:help', 'eigengate:report'], fail=False)
+REPORTING = '''
+  <reporting>
+    <plugins>
+      <plugin>
+        <groupId>@project.groupId@</groupId>
+        <artifactId>eigengate-maven-plugin</artifactId>
+        <version>@project.version@</version>
+      </plugin>
+    </plugins>
+  </reporting>'''
+SITE_POM = '''
+      </plugin>
+      <plugin>
+        <artifactId>maven-site-plugin</artifactId>
+        <version>3.21.0</version>'''
+ex = pathlib.Path(__file__).resolve().parent.parent.parent / 'example-project' / 'data'
+EXAMPLE = {'data/' + f.name: f.read_text(encoding='utf-8') for f in sorted(ex.iterdir()) if f.suffix == '.csv'}
+project('site-report-page', 'mvn site gives the site an Eigengate page (the example project tables) with report.html beside it.',
+        dict(EXAMPLE, **{'invoker.properties': 'invoker.goals = site\ninvoker.buildResult = success\n'}),
+        [], fail=False, config=SITE_POM, reporting=REPORTING,
+        extra_verify='''def page = new File(basedir, "target/site/eigengate.html").getText("UTF-8")
+assert page.contains("Eigengate: passing") : page
+assert page.contains("0 errors, 0 warnings") : page
+assert page.contains('href="eigengate/report.html"') : page
+def html = new File(basedir, "target/site/eigengate/report.html").getText("UTF-8")
+assert html.contains("Passing: no error in the tables")
+''')
