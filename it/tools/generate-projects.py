@@ -153,7 +153,7 @@ project('space-missing-orbit', 'A declared space with an orbit missing fails the
 bad = list(L11); bad[0] = 2
 project('skip-checks-property', 'eigengate.skipChecks turns a check off by its id.',
         {'data/forms.csv': FORMS, 'data/coefficients.csv': coeffs(l11=bad),
-         'invoker.properties': 'invoker.systemPropertiesFile = test.properties\ninvoker.buildResult = success\n',
+         'invoker.properties': 'invoker.userPropertiesFile = test.properties\ninvoker.buildResult = success\n',
          'test.properties': 'eigengate.skipChecks = normalisation,hecke-relations\n'},
         ['[INFO] eigengate: 0 errors'], fail=False)
 project('unknown-skip-check', 'An unknown check id in skipChecks is a configuration error, not a data error.',
@@ -163,7 +163,7 @@ project('unknown-skip-check', 'An unknown check id in skipChecks is a configurat
 project('datasets-by-property', 'eigengate.datasets takes comma-separated directories; each is checked.',
         {'tables-a/forms.csv': FORMS, 'tables-a/coefficients.csv': coeffs(),
          'tables-b/forms.csv': FORMS, 'tables-b/coefficients.csv': coeffs(l11=bad),
-         'invoker.properties': 'invoker.systemPropertiesFile = test.properties\ninvoker.buildResult = failure\n',
+         'invoker.properties': 'invoker.userPropertiesFile = test.properties\ninvoker.buildResult = failure\n',
          'test.properties': 'eigengate.datasets = tables-a,tables-b\n'},
         ['[ERROR] eigengate: 3 errors, 0 warnings, 0 notes in 2 datasets (4 forms, 48 coefficient rows',
          '[ERROR] tables-b/coefficients.csv:4: error [normalisation] form=lev11_wt2_o1 n=1: expected 1, found 2'])
