@@ -75,7 +75,7 @@ public final class HtmlReport {
                     String key = formKey(set, f.subject().name());
                     findingsOfForm.computeIfAbsent(key, k -> new ArrayList<>()).add(i);
                     long n = index(f.subject().detail());
-                    if (n > 0) {
+                    if (n > 0 && f.severity() != Severity.NOTE) {
                         flaggedPrimes.computeIfAbsent(key, k -> new LinkedHashSet<>()).add(n);
                     }
                 }
@@ -107,10 +107,10 @@ public final class HtmlReport {
         return datasets.isEmpty() ? "" : datasets.get(0);
     }
 
-    /** n from a detail {@code n=6} (or {@code p=5}), 0 when there is none. */
+    /** The coefficient index n of a detail {@code n=6}, 0 when there is none ({@code p=} names a residue prime). */
     static long index(String detail) {
         for (String part : detail.split(" ")) {
-            if (part.startsWith("n=") || part.startsWith("p=")) {
+            if (part.startsWith("n=")) {
                 try {
                     return Long.parseLong(part.substring(2));
                 } catch (NumberFormatException e) {
@@ -211,13 +211,10 @@ public final class HtmlReport {
     }
 
     private static String plural(String kind, int n) {
-        if (n == 1) {
-            return kind;
-        }
         return switch (kind) {
-            case "weights" -> "weight rows";
-            case "congruence" -> "congruences";
-            default -> kind + "s";
+            case "weights" -> n == 1 ? "weight row" : "weight rows";
+            case "reducible" -> n == 1 ? "reducibility claim" : "reducibility claims";
+            default -> n == 1 ? kind : kind + "s";
         };
     }
 

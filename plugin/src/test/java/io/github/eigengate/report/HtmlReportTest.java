@@ -155,4 +155,20 @@ class HtmlReportTest {
                 d.selectFirst("#findings .eg-none").text());
         assertEquals(0, d.select("polygon.eg-flag").size());
     }
+
+    @Test
+    void onlyErrorsAndWarningsAtAnIndexNAreDrawnAsFlags() {
+        // a note about the residue prime p=5 names no coefficient; a warning at n=3 does
+        Finding note = new Finding("weight-of-form", Severity.NOTE, new SourceLocation("data/modp-weights.csv", 2, 0),
+                Subject.form("f", "p=5"), "", "", "a note");
+        Finding warning = new Finding("field-sanity", Severity.WARNING, new SourceLocation("data/coefficients.csv", 4,
+                0), Subject.form("f", "n=3"), "", "", "a warning");
+        Report r = new Report(List.of("data"), List.of("field-sanity"), List.of(note, warning),
+                Map.of(Severity.WARNING, 1, Severity.NOTE, 1), 0, Map.of(), 1, 1, List.of());
+        FormSeries s = new FormSeries("data", 0, 0, "f", 11, 2, 1, new long[] {3, 5}, new double[][] {{0.1, 0.2}}, 0,
+                "", new double[0]);
+        Document d = Jsoup.parse(HtmlReport.render(r, List.of(s)));
+        assertEquals(List.of("3"), d.select("polygon.eg-flag").eachAttr("data-p"));
+        assertEquals(List.of("5"), d.select("circle.eg-pt").eachAttr("data-p"));
+    }
 }
