@@ -171,4 +171,20 @@ class HtmlReportTest {
         assertEquals(List.of("3"), d.select("polygon.eg-flag").eachAttr("data-p"));
         assertEquals(List.of("5"), d.select("circle.eg-pt").eachAttr("data-p"));
     }
+
+    @Test
+    void claimsShowTheirBoundAndHowFarTheDataReach() throws IOException {
+        // datasets/congruences (fixtures-gp/congruences.gp): a_n for n <= 1000. Sturm (LNM 1240, Thm 1) for
+        // lev77 ~ lev11 mod 3 on Γ0(77²): index 5929·(8/7)·(12/11) = 7392, B = floor(2·7392/12) = 1232 (by hand);
+        // the second row is the claim the check certifies (its note names B = 160), so the data reach past B
+        Report r = GateRun.run(io.github.eigengate.engine.Settings.defaults(), List.of(new io.github.eigengate.engine
+                        .Gate.Dataset(io.github.eigengate.engine.Fixture.dataset("congruences"), "data")),
+                dir.resolve("c"), Set.of("html"), List.of());
+        Document d = Jsoup.parse(Files.readString(dir.resolve("c/report.html")));
+        List<String> rows = d.select("table.eg-claims tbody tr").eachText();
+        assertEquals("data congruence=lev77_wt2_o1~lev11_wt2_o1 p=3 1232 1000 stops below B", rows.get(0));
+        assertTrue(rows.contains("data congruence=lev32_wt12_o2~lev32_wt2_o1 p=13 j=11 160 680 bound reached"),
+                String.join("\n", rows));
+        assertTrue(r.measures().stream().anyMatch(m -> m.check().equals("reducible")));
+    }
 }
