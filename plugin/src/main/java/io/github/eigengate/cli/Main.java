@@ -42,7 +42,7 @@ public final class Main implements Callable<Integer> {
     @Parameters(arity = "1..*", paramLabel = "DATASET", description = "dataset directories to check")
     private List<Path> datasets = new ArrayList<>();
 
-    @Option(names = "--skip-checks", split = ",", paramLabel = "ID[,ID…]",
+    @Option(names = "--skip-checks", split = ",", paramLabel = "ID",
             description = "ids of checks not to run (see docs/checks.md)")
     private List<String> skipChecks = new ArrayList<>();
 
@@ -59,7 +59,7 @@ public final class Main implements Callable<Integer> {
             description = "where the reports go (default: ${DEFAULT-VALUE})")
     private Path out;
 
-    @Option(names = "--format", split = ",", paramLabel = "FORMAT[,FORMAT…]", defaultValue = "html,json,junit",
+    @Option(names = "--format", split = ",", paramLabel = "FORMAT", defaultValue = "html,json,junit",
             description = "report files to write: html, json, junit (default: ${DEFAULT-VALUE}); certificates are "
                     + "always written")
     private List<String> formats;
