@@ -10,10 +10,8 @@ final class Terminal {
     }
 
     static boolean stderrIsTerminal() {
-        if (System.console() == null) {
-            return false;
-        }
-        // Linux: fd 2 links to the terminal device; elsewhere a console on stdin/stdout is the best sign there is
+        // Linux: fd 2 links to the terminal device (also when stdout is redirected); elsewhere a console on
+        // stdin/stdout is the best sign there is
         Path fd2 = Path.of("/proc/self/fd/2");
         if (Files.exists(fd2)) {
             try {
@@ -23,6 +21,6 @@ final class Terminal {
                 return false;
             }
         }
-        return true;
+        return System.console() != null;
     }
 }

@@ -224,4 +224,10 @@ class MainTest {
         demo("data", false);
         assertEquals("", run(true, "--quiet", "data").err());
     }
+
+    @Test
+    void aPipeIsNotATerminal() {
+        // surefire's forked JVM writes stderr to a pipe, as CI and `2> file` do
+        assertFalse(Terminal.stderrIsTerminal());
+    }
 }
