@@ -23,6 +23,9 @@ import java.util.TreeMap;
  */
 public final class HtmlReport {
 
+    /** Forms drawn with plots; beyond these (forms with findings are always drawn) a form gets a line in a list. */
+    static final int MAX_PLOTTED_FORMS = 300;
+
     private HtmlReport() {
     }
 
@@ -334,9 +337,16 @@ public final class HtmlReport {
                 + "real embedding in its own colour; the shaded band is |x_p| ≤ 1 (Ramanujan–Petersson); a "
                 + "diamond marks a prime some finding names. Right: their histogram against the distribution the "
                 + "theory predicts."));
+        int drawn = 0;
+        List<String> undrawn = new ArrayList<>();
         for (FormSeries s : m.forms) {
             String key = formKey(s.dataset(), s.id());
             Set<Long> flagged = m.flaggedPrimes.getOrDefault(key, Set.of());
+            if (drawn >= MAX_PLOTTED_FORMS && !m.findingsOfForm.containsKey(key)) {
+                undrawn.add(s.id());
+                continue;
+            }
+            drawn++;
             Html a = Html.el("article").attr("id", formAnchor(key)).cls("eg-form").attr("data-form", key);
             Html h = Html.el("h3").text(s.id());
             if (s.looksCm()) {
@@ -379,6 +389,11 @@ public final class HtmlReport {
                 a.add(ul);
             }
             sec.add(a);
+        }
+        if (!undrawn.isEmpty()) {
+            sec.add(Html.el("p", "eg-note", undrawn.size() + " more forms without findings are not drawn (the page "
+                    + "draws at most " + MAX_PLOTTED_FORMS + " forms beside every form with a finding): "
+                    + String.join(", ", undrawn)));
         }
         return sec;
     }

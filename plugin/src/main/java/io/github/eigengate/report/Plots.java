@@ -19,6 +19,8 @@ final class Plots {
     static final int BINS = 16;
     /** Samples of the density curve across [−1, 1]. */
     static final int CURVE_SAMPLES = 81;
+    /** Points drawn per embedding in the scatter plot (the histogram counts all): the first primes, then every k-th. */
+    static final int MAX_POINTS = 1200;
 
     static final String[] EMBEDDING_COLOURS = {"#2f6f8f", "#8a4f9e", "#3f8a4f", "#a06a2c", "#5b6b7a"};
 
@@ -53,8 +55,12 @@ final class Plots {
         List<Html> marks = new ArrayList<>();
         for (int e = 0; e < s.embeddings(); e++) {
             String colour = EMBEDDING_COLOURS[e % EMBEDDING_COLOURS.length];
+            int stride = Math.max(1, (s.primes().length + MAX_POINTS - 1) / MAX_POINTS);
             for (int i = 0; i < s.primes().length; i++) {
                 long p = s.primes()[i];
+                if (i % stride != 0 && !flagged.contains(p)) {
+                    continue;
+                }
                 double v = s.values()[e][i];
                 double cx = ax.x(p);
                 double cy = ax.y(Math.max(-ym, Math.min(ym, v)));

@@ -187,4 +187,19 @@ class HtmlReportTest {
                 String.join("\n", rows));
         assertTrue(r.measures().stream().anyMatch(m -> m.check().equals("reducible")));
     }
+
+    @Test
+    void manyFormsWithoutFindingsAreListedNotDrawn() {
+        // layout only: 305 forms without data
+        List<FormSeries> forms = new ArrayList<>();
+        for (int i = 0; i < 305; i++) {
+            forms.add(new FormSeries("data", 0, i, "f" + i, 11, 2, 1, new long[0], new double[1][0], 0, "",
+                    new double[0]));
+        }
+        Report r = new Report(List.of("data"), List.of(), List.of(), Map.of(), 0, Map.of(), 0, 305, List.of());
+        Document d = Jsoup.parse(HtmlReport.render(r, forms));
+        assertEquals(HtmlReport.MAX_PLOTTED_FORMS, d.select("article.eg-form").size());
+        assertTrue(d.select("#forms p.eg-note").last().text().startsWith("5 more forms without findings are not "
+                + "drawn"), d.select("#forms p.eg-note").last().text());
+    }
 }

@@ -148,4 +148,19 @@ class PlotsTest {
         assertEquals(List.of(1L, 2L, 3L, 4L, 5L), Plots.ticks(5));
         assertEquals(List.of(500L, 1000L, 1500L, 2000L), Plots.ticks(2000));
     }
+
+    @Test
+    void aLongSeriesIsThinnedButKeepsItsFlaggedPrime() {
+        // layout only: 5000 indices standing for primes, all at x = 0
+        long[] p = new long[5000];
+        for (int i = 0; i < p.length; i++) {
+            p[i] = i + 2;
+        }
+        FormSeries s = new FormSeries("data", 0, 0, "long", 1, 12, 1, p, new double[][] {new double[p.length]}, 0,
+                "", new double[0]);
+        Document d = svg(Plots.scatter(s, Set.of(4003L)));
+        assertEquals(1000, d.select("circle.eg-pt").size(), "every 5th of 5000 (stride ceil(5000/1200))");
+        assertEquals(List.of("4003"), d.select("polygon.eg-flag").eachAttr("data-p"));
+        assertEquals("n = 5000 primes", svg(Plots.histogram(s)).select("text.eg-label").last().text());
+    }
 }
