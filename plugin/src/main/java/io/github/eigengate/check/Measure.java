@@ -15,8 +15,4 @@ public record Measure(String dataset, String check, Subject unit, String quantit
     public Measure {
         dataset = dataset == null ? "" : dataset;
     }
-
-    public Measure in(String dataset) {
-        return new Measure(dataset, check, unit, quantity, value);
-    }
 }
