@@ -28,7 +28,7 @@ POM='''<?xml version="1.0" encoding="UTF-8"?>
         </executions>%(config)s
       </plugin>
     </plugins>
-  </build>
+  </build>%(reporting)s
 </project>
 '''
 # a_n of the weight-2 newform of level 11, n = 1..12: OEIS A006571; also computed with PARI/GP 2.15.2 (Debian pari-gp):
@@ -45,10 +45,10 @@ def coeffs(l11=L11, l23=L23, extra=''):
     for i,v in enumerate(l11): s += 'lev11_wt2_o1,%d,%s\n' % (i+1, v)
     for i,v in enumerate(l23): s += 'lev23_wt2_o1,%d,%s\n' % (i+1, ('"%s"' % v) if ',' in v else v)
     return s + extra
-def project(name, desc, files, expect, fail=True, config='', extra_verify=''):
+def project(name, desc, files, expect, fail=True, config='', extra_verify='', reporting=''):
     d = os.path.join(root, name)
     os.makedirs(d, exist_ok=True)
-    open(os.path.join(d,'pom.xml'),'w').write(POM % dict(name=name, desc=desc.replace('&', '&amp;').replace('<', '&lt;').replace('>', '&gt;'), config=config))
+    open(os.path.join(d,'pom.xml'),'w').write(POM % dict(name=name, desc=desc.replace('&', '&amp;').replace('<', '&lt;').replace('>', '&gt;'), config=config, reporting=reporting))
     for fn, content in files.items():
         p = os.path.join(d, fn)
         os.makedirs(os.path.dirname(p), exist_ok=True)
@@ -73,7 +73,7 @@ project('clean-dataset-passes', 'True coefficients pass; reports are written.', 
         fail=False, extra_verify='''def json = new File(basedir, "target/eigengate/report.json").getText("UTF-8")
 assert json.contains('"passed": true')
 def xml = new File(basedir, "target/eigengate/TEST-eigengate.xml").getText("UTF-8")
-assert xml.contains('<testcase classname="eigengate.normalisation" name="form lev11_wt2_o1"/>')
+assert xml.contains('<testcase classname="eigengate.normalisation" name="data: form lev11_wt2_o1"/>')
 ''')
 project('skip-property-skips', 'eigengate.skip skips even a broken dataset.', {'data/forms.csv': 'id,level\n'},
         ['[INFO] eigengate: skipped'], fail=False, config='\n        <configuration><skip>true</skip></configuration>')
@@ -82,7 +82,7 @@ project('normalisation-fail', 'a_1 = 2 fails the normalisation check, naming fil
         {'data/forms.csv': FORMS, 'data/coefficients.csv': coeffs(l11=bad)},
         ['[ERROR] data/coefficients.csv:4: error [normalisation] form=lev11_wt2_o1 n=1: expected 1, found 2; a newform is normalised so that a_1 = 1'],
         extra_verify='''def xml = new File(basedir, "target/eigengate/TEST-eigengate.xml").getText("UTF-8")
-assert xml.contains('<testcase classname="eigengate.normalisation" name="form lev11_wt2_o1">')
+assert xml.contains('<testcase classname="eigengate.normalisation" name="data: form lev11_wt2_o1">')
 assert xml.contains('<failure message="data/coefficients.csv:4: error [normalisation]')
 def json = new File(basedir, "target/eigengate/report.json").getText("UTF-8")
 assert json.contains('"check": "normalisation", "severity": "error", "file": "data/coefficients.csv", "line": 4')
@@ -163,7 +163,7 @@ project('space-character-fail', 'spaces.csv rows with characters: a Galois orbit
 bad = list(L11); bad[0] = 2
 project('skip-checks-property', 'eigengate.skipChecks turns a check off by its id.',
         {'data/forms.csv': FORMS, 'data/coefficients.csv': coeffs(l11=bad),
-         'invoker.properties': 'invoker.systemPropertiesFile = test.properties\ninvoker.buildResult = success\n',
+         'invoker.properties': 'invoker.userPropertiesFile = test.properties\ninvoker.buildResult = success\n',
          'test.properties': 'eigengate.skipChecks = normalisation,hecke-relations\n'},
         ['[INFO] eigengate: 0 errors'], fail=False)
 project('unknown-skip-check', 'An unknown check id in skipChecks is a configuration error, not a data error.',
@@ -173,7 +173,7 @@ project('unknown-skip-check', 'An unknown check id in skipChecks is a configurat
 project('datasets-by-property', 'eigengate.datasets takes comma-separated directories; each is checked.',
         {'tables-a/forms.csv': FORMS, 'tables-a/coefficients.csv': coeffs(),
          'tables-b/forms.csv': FORMS, 'tables-b/coefficients.csv': coeffs(l11=bad),
-         'invoker.properties': 'invoker.systemPropertiesFile = test.properties\ninvoker.buildResult = failure\n',
+         'invoker.properties': 'invoker.userPropertiesFile = test.properties\ninvoker.buildResult = failure\n',
          'test.properties': 'eigengate.datasets = tables-a,tables-b\n'},
         # a_1 = 2 is one error: the prime-power recursion starts from a_p and a_1 = 1, not from the wrong a_1
         ['[ERROR] eigengate: 1 error, 0 warnings, 0 notes in 2 datasets (4 forms, 48 coefficient rows',
@@ -197,6 +197,7 @@ project('congruence-certified-with-certificate',
         fail=False, extra_verify='''def cert = new File(basedir, "target/eigengate/certificates/congruence-delta-f11-p11.txt").getText("UTF-8")
 assert cert.contains("bound B = floor(W*index/12): 12") : cert
 assert cert.contains("sha256 ") && cert.contains("  coefficients.csv") : cert
+assert cert.contains("  congruences.csv") : "the claim file is hashed too: " + cert
 ''')
 project('weight-set-missing-weight',
         'A predicted weight set that drops a Serre weight fails, naming form, p and the missing weight (level 11 is supersingular at 19: a_19 = 0).',
@@ -376,3 +377,89 @@ c37dup = c37 + '\n'.join(l.replace('lev37_wt2_o1,', 'again,') for l in c37.split
 project('duplicate-orbit-named', 'One orbit listed twice under two ids is named as a duplicated orbit.',
         {'data/forms.csv': f37 + 'again,37,2,,,37:-1,+1\n', 'data/coefficients.csv': c37dup},
         ['[ERROR] data/forms.csv:4: error [duplicate-orbit] form=again: expected a newform differing from lev37_wt2_o1, found the same 26 coefficients as lev37_wt2_o1 (data/forms.csv:3); a duplicated orbit: distinct newforms of one space differ at some a_p (multiplicity one), so again repeats lev37_wt2_o1'])
+# --- issue 11: the HTML report, failOnError / failOnWarning, the help goal, the site page
+b = list(L11); b[5] = '-2'
+project('html-report-of-failing-dataset', 'A failing run writes report.html: the verdict, the finding by anchor, a plot per form.',
+        {'data/forms.csv': FORMS, 'data/coefficients.csv': coeffs(l11=b)},
+        ['[ERROR] data/coefficients.csv:9: error [hecke-relations] form=lev11_wt2_o1 n=6: expected 2, found -2;',
+         'full report in target/eigengate/report.html'],
+        extra_verify='''def html = new File(basedir, "target/eigengate/report.html").getText("UTF-8")
+assert html.startsWith("<!DOCTYPE html>")
+assert html.contains('<h1 id="verdict" class="eg-verdict">') && html.contains("Failing: 1 error in the tables")
+assert html.contains('<tr id="finding-1" class="eg-finding eg-row-error" data-check="hecke-relations"')
+assert (html =~ /<svg [^>]*class="eg-plot eg-scatter"/).size() == 2 : "one plot per form"
+assert !html.contains("<link") && !html.contains("src=") : "self-contained"
+''')
+bad = list(L11); bad[0] = 2
+project('fail-on-error-false-reports-only', 'failOnError=false reports the errors and writes the reports but lets the build pass.',
+        {'data/forms.csv': FORMS, 'data/coefficients.csv': coeffs(l11=bad),
+         'invoker.properties': 'invoker.goals = verify -Deigengate.failOnError=false\ninvoker.buildResult = success\n'},
+        ['[ERROR] data/coefficients.csv:4: error [normalisation] form=lev11_wt2_o1 n=1: expected 1, found 2',
+         '[WARNING] eigengate: failOnError is false: the build goes on despite 3 errors (listed above; full report in target/eigengate/report.html)'],
+        fail=False)
+FORMS_EXTRA = FORMS.replace('id,level,weight,character,field', 'id,level,weight,character,field,remark').replace(',x^2 - x - 1', ',x^2 - x - 1,').replace('lev11_wt2_o1,11,2,,', 'lev11_wt2_o1,11,2,,,')
+project('fail-on-warning-fails-on-a-warning', 'failOnWarning=true fails the build on a warning (here: an unknown column).',
+        {'data/forms.csv': FORMS_EXTRA, 'data/coefficients.csv': coeffs(),
+         'invoker.properties': 'invoker.goals = verify -Deigengate.failOnWarning=true\ninvoker.buildResult = failure\n'},
+        ['[INFO] eigengate: 0 errors, 1 warning, 0 notes in 1 dataset',
+         'eigengate: 0 errors and 1 warning in the data (listed above; full report in target/eigengate/report.html); failOnWarning is set'])
+project('help-goal-lists-goals', 'mvn eigengate:help (prefix from the plugin in the pom) lists the goals check, report and help.',
+        {'data/forms.csv': FORMS, 'data/coefficients.csv': coeffs(),
+         'invoker.properties': 'invoker.goals = eigengate:help -Ddetail=false\ninvoker.buildResult = success\n'},
+        ['eigengate:check', 'eigengate:help', 'eigengate:report'], fail=False)
+REPORTING = '''
+  <reporting>
+    <plugins>
+      <plugin>
+        <groupId>@project.groupId@</groupId>
+        <artifactId>eigengate-maven-plugin</artifactId>
+        <version>@project.version@</version>
+      </plugin>
+    </plugins>
+  </reporting>'''
+SITE_POM = '''
+      </plugin>
+      <plugin>
+        <artifactId>maven-site-plugin</artifactId>
+        <version>3.21.0</version>'''
+ex = pathlib.Path(__file__).resolve().parent.parent.parent / 'example-project' / 'data'
+EXAMPLE = {'data/' + f.name: f.read_text(encoding='utf-8') for f in sorted(ex.iterdir()) if f.suffix == '.csv'}
+project('site-report-page', 'mvn site gives the site an Eigengate page (the example project tables) with report.html beside it.',
+        dict(EXAMPLE, **{'invoker.properties': 'invoker.goals = site\ninvoker.buildResult = success\n'}),
+        [], fail=False, config=SITE_POM, reporting=REPORTING,
+        extra_verify='''def page = new File(basedir, "target/site/eigengate.html").getText("UTF-8")
+assert page.contains("Eigengate: passing") : page
+assert page.contains("0 errors, 0 warnings") : page
+assert page.contains('href="eigengate/report.html"') : page
+def html = new File(basedir, "target/site/eigengate/report.html").getText("UTF-8")
+assert html.contains("Passing: no error in the tables")
+''')
+b = list(L11); b[5] = '-2'
+CLI_VERIFY = '''// the shaded command line the reactor built (plugin/target), run on the data directory as a non-Maven repository would
+def dir = new File(basedir, "../../../../plugin/target").canonicalFile
+def jars = dir.listFiles().findAll { it.name.endsWith("-cli.jar") }
+assert jars.size() == 1 : "one -cli jar in " + dir + ": " + jars
+def java = new File(System.getProperty("java.home"), "bin/java").path
+def run = { List args ->
+    def p = ([java, "-jar", jars[0].path] + args).execute(null, basedir)
+    def out = new StringBuilder(), err = new StringBuilder()
+    p.waitForProcessOutput(out, err)
+    [p.exitValue(), out.toString(), err.toString()]
+}
+def (code, out, err) = run(["data"])
+assert code == 1 : "exit " + code + "\\n" + out + err
+assert out.readLines() == [
+    "[ERROR] eigengate: 1 error, 0 warnings, 0 notes in 1 dataset (2 forms, 24 coefficient rows, 13 checks)",
+    "[ERROR] data/coefficients.csv:9: error [hecke-relations] form=lev11_wt2_o1 n=6: expected 2, found -2; a_mn = a_m a_n for coprime m=2, n=3, a_2=-2, a_3=-1 (Diamond–Shurman Prop. 5.8.5)",
+    "[ERROR] eigengate: report in target/eigengate/report.html"] : out
+assert err == "" : "no progress line when stderr is not a terminal: " + err
+assert new File(basedir, "target/eigengate/report.html").text.contains("Failing: 1 error in the tables")
+def (helpCode, help, helpErr) = run(["--help"])
+assert helpCode == 0 && help.startsWith("Usage: eigengate ")
+def (badCode, badOut, badErr) = run(["no-such-dir"])
+assert badCode == 2 && badErr.startsWith("eigengate: not a dataset directory: no-such-dir")
+'''
+project('cli-jar-gates-a-directory', 'The -cli jar (java -jar) gates a data directory with the goal\'s lines and exit codes 1, 0, 2.',
+        {'data/forms.csv': FORMS, 'data/coefficients.csv': coeffs(l11=b),
+         'invoker.properties': 'invoker.goals = validate\ninvoker.buildResult = success\n'},
+        [], fail=False, extra_verify=CLI_VERIFY)

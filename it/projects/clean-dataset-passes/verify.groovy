@@ -6,5 +6,5 @@ assert !(log =~ /(?m)^\s+at [\w.$]+\(/) : "a stack trace reached the log"
 def json = new File(basedir, "target/eigengate/report.json").getText("UTF-8")
 assert json.contains('"passed": true')
 def xml = new File(basedir, "target/eigengate/TEST-eigengate.xml").getText("UTF-8")
-assert xml.contains('<testcase classname="eigengate.normalisation" name="form lev11_wt2_o1"/>')
+assert xml.contains('<testcase classname="eigengate.normalisation" name="data: form lev11_wt2_o1"/>')
 return true

@@ -6,4 +6,5 @@ assert !(log =~ /(?m)^\s+at [\w.$]+\(/) : "a stack trace reached the log"
 def cert = new File(basedir, "target/eigengate/certificates/congruence-delta-f11-p11.txt").getText("UTF-8")
 assert cert.contains("bound B = floor(W*index/12): 12") : cert
 assert cert.contains("sha256 ") && cert.contains("  coefficients.csv") : cert
+assert cert.contains("  congruences.csv") : "the claim file is hashed too: " + cert
 return true

@@ -31,7 +31,9 @@ class ArchitectureTest {
             "check", List.of("io.github.eigengate.engine", "io.github.eigengate.report", "io.github.eigengate.maven",
                     "org.apache."),
             "engine", List.of("io.github.eigengate.report", "io.github.eigengate.maven", "org.apache."),
-            "report", List.of("io.github.eigengate.maven", "org.apache."));
+            "report", List.of("io.github.eigengate.maven", "org.apache."),
+            // the command line sees the engine and the reports, never Maven
+            "cli", List.of("io.github.eigengate.maven", "org.apache.maven", "org.codehaus.plexus"));
 
     @Test
     void packagesReferOnlyDownwards() throws IOException {
@@ -54,6 +56,30 @@ class ArchitectureTest {
             }
         }
         assertTrue(files > 40, "sources found: " + files);
+        assertEquals(List.of(), violations);
+    }
+
+    /** The command line is a thin layer: the engine, the reports and picocli, nothing of Maven. */
+    @Test
+    void theCommandLineImportsOnlyTheEngineTheReportsAndPicocli() throws IOException {
+        List<String> allowed = List.of("java.", "picocli.", "io.github.eigengate.engine.", "io.github.eigengate.report.",
+                "io.github.eigengate.check.", "io.github.eigengate.data.", "io.github.eigengate.cli.");
+        List<String> violations = new ArrayList<>();
+        int files = 0;
+        try (Stream<Path> all = Files.list(MAIN.resolve("cli"))) {
+            for (Path p : all.filter(f -> f.toString().endsWith(".java")).toList()) {
+                files++;
+                for (String line : Files.readAllLines(p)) {
+                    if (line.startsWith("import ")) {
+                        String ref = line.substring(7).replace("static ", "").strip();
+                        if (allowed.stream().noneMatch(ref::startsWith)) {
+                            violations.add(p.getFileName() + ": " + line);
+                        }
+                    }
+                }
+            }
+        }
+        assertTrue(files >= 3, "cli sources found: " + files);
         assertEquals(List.of(), violations);
     }
 }

@@ -14,6 +14,10 @@ public interface FindingSink {
     default void certificate(Certificate certificate) {
     }
 
+    /** Records a quantity computed about a unit, for the reports (see {@link Measure}); never a verdict. */
+    default void measure(String check, Subject unit, String quantity, String value) {
+    }
+
     default void error(String check, SourceLocation at, Subject subject, String expected, String found,
                        String reason) {
         report(new Finding(check, Severity.ERROR, at, subject, expected, found, reason));

@@ -3,6 +3,7 @@ package io.github.eigengate.engine;
 import io.github.eigengate.check.Certificate;
 import io.github.eigengate.check.Finding;
 import io.github.eigengate.check.FindingSink;
+import io.github.eigengate.check.Measure;
 import io.github.eigengate.check.Severity;
 import io.github.eigengate.check.Subject;
 import io.github.eigengate.data.Problems;
@@ -24,9 +25,18 @@ final class Collector implements FindingSink, Problems {
     private final Map<String, Set<Subject>> examined = new LinkedHashMap<>();
     private final List<Certificate> certificates = new ArrayList<>();
     private int dropped;
+    private final String dataset;
+    private final Map<String, Map<String, Set<Subject>>> examinedIn = new LinkedHashMap<>();
+    private final List<Measure> measures = new ArrayList<>();
 
     Collector(int cap) {
+        this(cap, "");
+    }
+
+    /** A collector for one dataset: its examined units and measures are filed under that dataset's name. */
+    Collector(int cap, String dataset) {
         this.cap = cap;
+        this.dataset = dataset;
         for (Severity s : Severity.values()) {
             counts.put(s, 0);
         }
@@ -60,11 +70,33 @@ final class Collector implements FindingSink, Problems {
             dropped += notKept;
         }
         certificates.addAll(other.certificates);
+        measures.addAll(other.measures);
+        other.examinedIn.forEach((set, byCheck) -> byCheck.forEach((check, units) ->
+                examinedIn.computeIfAbsent(set, k -> new LinkedHashMap<>())
+                          .computeIfAbsent(check, k -> new LinkedHashSet<>()).addAll(units)));
     }
 
     @Override
     public void examined(String check, Subject unit) {
         examined.computeIfAbsent(check, k -> new LinkedHashSet<>()).add(unitOf(unit));
+        if (!dataset.isEmpty()) {
+            examinedIn.computeIfAbsent(dataset, k -> new LinkedHashMap<>())
+                      .computeIfAbsent(check, k -> new LinkedHashSet<>()).add(unitOf(unit));
+        }
+    }
+
+    @Override
+    public void measure(String check, Subject unit, String quantity, String value) {
+        measures.add(new Measure(dataset, check, unit, quantity, value));
+    }
+
+    /** Dataset → check → units examined there. */
+    Map<String, Map<String, Set<Subject>>> examinedIn() {
+        return examinedIn;
+    }
+
+    List<Measure> measures() {
+        return measures;
     }
 
     @Override

@@ -21,13 +21,20 @@ public final class Gate {
 
     private final Settings settings;
     private final List<Check> checks;
+    private final List<Observer> observers;
 
     public Gate(Settings settings) {
         this(settings, Checks.all(settings));
     }
 
     public Gate(Settings settings, List<Check> available) {
+        this(settings, available, List.of());
+    }
+
+    /** A gate whose observers see every form beside the checks (report data, progress). */
+    public Gate(Settings settings, List<Check> available, List<Observer> observers) {
         this.settings = settings;
+        this.observers = List.copyOf(observers);
         List<Check> enabled = new ArrayList<>();
         for (Check c : available) {
             if (!settings.skip().contains(c.id())) {
@@ -60,7 +67,8 @@ public final class Gate {
         }
         return new Report(datasets.stream().map(Dataset::display).toList(), checks.stream().map(Check::id).toList(),
                 List.copyOf(collector.kept()), collector.counts(), collector.dropped(), collector.examined(), rows,
-                forms, List.copyOf(collector.certificates()));
+                forms, List.copyOf(collector.certificates()), collector.examinedIn(),
+                List.copyOf(collector.measures()));
     }
 
     /**
@@ -71,10 +79,13 @@ public final class Gate {
     private long runChecks(Catalog catalog, Collector outer) {
         Set<String> holdBack = Set.of();
         while (true) {
-            Collector local = new Collector(settings.maxFindings());
+            Collector local = new Collector(settings.maxFindings(), catalog.display());
             List<Check.Pass> passes = new ArrayList<>();
             for (Check c : checks) {
                 passes.add(c.start(catalog));
+            }
+            for (Observer o : observers) {
+                passes.add(o.start(catalog));
             }
             Set<String> seen = new HashSet<>();
             long[] rows = {0};

@@ -2,6 +2,7 @@ package io.github.eigengate.engine;
 
 import io.github.eigengate.check.Certificate;
 import io.github.eigengate.check.Finding;
+import io.github.eigengate.check.Measure;
 import io.github.eigengate.check.Severity;
 import io.github.eigengate.check.Subject;
 import java.util.List;
@@ -11,10 +12,22 @@ import java.util.Set;
 /**
  * The outcome of a run: findings (the first {@code maxFindings} in full), counts by severity including the ones
  * not kept, the units each check examined, and what was read.
+ *
+ * @param examinedIn dataset → check → the units it examined there (so reports can tell two datasets apart)
+ * @param measures   quantities the checks computed about their units, for the reports to show
  */
 public record Report(List<String> datasets, List<String> checks, List<Finding> findings,
                      Map<Severity, Integer> counts, int notKept, Map<String, Set<Subject>> examined,
-                     long rows, int forms, List<Certificate> certificates) {
+                     long rows, int forms, List<Certificate> certificates,
+                     Map<String, Map<String, Set<Subject>>> examinedIn, List<Measure> measures) {
+
+    /** A report whose examined units are not told apart by dataset, and without measures. */
+    public Report(List<String> datasets, List<String> checks, List<Finding> findings, Map<Severity, Integer> counts,
+                  int notKept, Map<String, Set<Subject>> examined, long rows, int forms,
+                  List<Certificate> certificates) {
+        this(datasets, checks, findings, counts, notKept, examined, rows, forms, certificates,
+                datasets.isEmpty() ? Map.of() : Map.of(datasets.get(0), examined), List.of());
+    }
 
     public int errors() {
         return counts.getOrDefault(Severity.ERROR, 0);

@@ -1,9 +1,10 @@
 package io.github.eigengate.maven;
 
-import io.github.eigengate.check.Finding;
 import io.github.eigengate.engine.Gate;
 import io.github.eigengate.engine.Report;
 import io.github.eigengate.engine.Settings;
+import io.github.eigengate.report.Console;
+import io.github.eigengate.report.GateRun;
 import io.github.eigengate.report.ReportFiles;
 import java.io.File;
 import java.io.IOException;
@@ -54,6 +55,17 @@ public final class CheckMojo extends AbstractMojo {
     @Parameter(property = "eigengate.outputDirectory", defaultValue = "${project.build.directory}/eigengate")
     private File outputDirectory;
 
+    /**
+     * Fails the build on an error finding. Set it to false to only report (for a first adoption on old tables).
+     * Default: true.
+     */
+    @Parameter(property = "eigengate.failOnError", defaultValue = "true")
+    private boolean failOnError;
+
+    /** Fails the build on a warning finding too. Default: false. */
+    @Parameter(property = "eigengate.failOnWarning", defaultValue = "false")
+    private boolean failOnWarning;
+
     @Parameter(defaultValue = "${project.basedir}", readonly = true, required = true)
     private File basedir;
 
@@ -71,19 +83,30 @@ public final class CheckMojo extends AbstractMojo {
         if (sets.isEmpty()) {
             throw new MojoExecutionException("eigengate: no dataset directories configured (parameter 'datasets')");
         }
-        Report report = new Gate(settings).run(sets);
+        Report report;
         try {
-            ReportFiles.write(report, outputDirectory.toPath());
+            report = GateRun.run(settings, sets, outputDirectory.toPath(), Set.copyOf(ReportFiles.FORMATS),
+                    List.of());
         } catch (IOException e) {
             throw new MojoExecutionException("eigengate: cannot write reports to " + outputDirectory + ": "
                     + e.getMessage(), e);
         }
         log(report);
-        if (report.failed()) {
-            throw new MojoFailureException("eigengate: " + report.errors() + " error"
-                    + (report.errors() == 1 ? "" : "s") + " in the data (listed above; full report in "
-                    + display(outputDirectory.toPath().resolve(ReportFiles.JSON)) + ")");
+        String where = " (listed above; full report in " + display(outputDirectory.toPath().resolve(ReportFiles.HTML))
+                + ")";
+        if (Console.fails(report, failOnError, failOnWarning)) {
+            throw new MojoFailureException("eigengate: " + count(report.errors(), "error") + " and "
+                    + count(report.warnings(), "warning") + " in the data" + where
+                    + (failOnWarning ? "; failOnWarning is set" : ""));
         }
+        if (report.failed()) {
+            getLog().warn("eigengate: failOnError is false: the build goes on despite "
+                    + count(report.errors(), "error") + where);
+        }
+    }
+
+    private static String count(int n, String what) {
+        return n + " " + what + (n == 1 ? "" : "s");
     }
 
     private Settings settings() throws MojoExecutionException {
@@ -112,17 +135,11 @@ public final class CheckMojo extends AbstractMojo {
     }
 
     private void log(Report report) {
-        String summary = "eigengate: " + report.summary();
-        if (report.failed()) {
-            getLog().error(summary);
-        } else {
-            getLog().info(summary);
-        }
-        for (Finding f : report.findings()) {
-            switch (f.severity()) {
-                case ERROR -> getLog().error(f.line());
-                case WARNING -> getLog().warn(f.line());
-                case NOTE -> getLog().info(f.line());
+        for (Console.Line line : Console.lines(report)) {
+            switch (line.level()) {
+                case ERROR -> getLog().error(line.text());
+                case WARNING -> getLog().warn(line.text());
+                case NOTE -> getLog().info(line.text());
             }
         }
     }

@@ -22,23 +22,28 @@ public final class JUnitXmlReport {
     }
 
     public static String render(Report r) {
-        Map<String, Map<Subject, List<Finding>>> byCheck = new LinkedHashMap<>();
-        for (Map.Entry<String, Set<Subject>> e : r.examined().entrySet()) {
-            Map<Subject, List<Finding>> units = byCheck.computeIfAbsent(e.getKey(), k -> new LinkedHashMap<>());
-            for (Subject u : e.getValue()) {
-                units.computeIfAbsent(u, k -> new ArrayList<>());
+        // a test case per (dataset, unit), so equal form ids in two datasets never collide
+        Map<String, Map<Case, List<Finding>>> byCheck = new LinkedHashMap<>();
+        for (String set : r.datasets()) {
+            Map<String, Set<Subject>> checks = r.examinedIn().getOrDefault(set, Map.of());
+            for (Map.Entry<String, Set<Subject>> e : checks.entrySet()) {
+                Map<Case, List<Finding>> units = byCheck.computeIfAbsent(e.getKey(), k -> new LinkedHashMap<>());
+                for (Subject u : e.getValue()) {
+                    units.computeIfAbsent(new Case(set, u), k -> new ArrayList<>());
+                }
             }
         }
         for (Finding f : r.findings()) {
             Subject unit = new Subject(f.subject().kind(), f.subject().name(), "");
+            Case c = new Case(HtmlReport.datasetOf(f.location().file(), r.datasets()), unit);
             byCheck.computeIfAbsent(f.check(), k -> new LinkedHashMap<>())
-                   .computeIfAbsent(unit, k -> new ArrayList<>()).add(f);
+                   .computeIfAbsent(c, k -> new ArrayList<>()).add(f);
         }
         StringBuilder b = new StringBuilder(8192);
         b.append("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n");
         int total = 0;
         int failures = 0;
-        for (Map<Subject, List<Finding>> units : byCheck.values()) {
+        for (Map<Case, List<Finding>> units : byCheck.values()) {
             total += units.size();
             for (List<Finding> fs : units.values()) {
                 if (fs.stream().anyMatch(f -> f.severity() == Severity.ERROR)) {
@@ -48,16 +53,16 @@ public final class JUnitXmlReport {
         }
         b.append("<testsuites name=\"eigengate\" tests=\"").append(total).append("\" failures=\"").append(failures)
          .append("\" errors=\"0\">\n");
-        for (Map.Entry<String, Map<Subject, List<Finding>>> e : byCheck.entrySet()) {
+        for (Map.Entry<String, Map<Case, List<Finding>>> e : byCheck.entrySet()) {
             String suite = "eigengate." + e.getKey();
-            Map<Subject, List<Finding>> units = e.getValue();
+            Map<Case, List<Finding>> units = e.getValue();
             long failed = units.values().stream()
                     .filter(fs -> fs.stream().anyMatch(f -> f.severity() == Severity.ERROR)).count();
             b.append("  <testsuite name=\"").append(attr(suite)).append("\" tests=\"").append(units.size())
              .append("\" failures=\"").append(failed).append("\" errors=\"0\" skipped=\"0\">\n");
-            for (Map.Entry<Subject, List<Finding>> u : units.entrySet()) {
+            for (Map.Entry<Case, List<Finding>> u : units.entrySet()) {
                 b.append("    <testcase classname=\"").append(attr(suite)).append("\" name=\"")
-                 .append(attr(u.getKey().unit())).append('"');
+                 .append(attr(u.getKey().name())).append('"');
                 List<Finding> errors = u.getValue().stream().filter(f -> f.severity() == Severity.ERROR).toList();
                 List<Finding> others = u.getValue().stream().filter(f -> f.severity() != Severity.ERROR).toList();
                 if (errors.isEmpty() && others.isEmpty()) {
@@ -79,6 +84,13 @@ public final class JUnitXmlReport {
         }
         b.append("</testsuites>\n");
         return b.toString();
+    }
+
+    /** A test case: a unit of one dataset, named {@code <dataset>: <unit>}, e.g. {@code data: form f1}. */
+    private record Case(String dataset, Subject unit) {
+        String name() {
+            return dataset.isEmpty() ? unit.unit() : dataset + ": " + unit.unit();
+        }
     }
 
     private static String lines(List<Finding> fs) {

@@ -68,15 +68,15 @@ class ReportsTest {
                 <?xml version="1.0" encoding="UTF-8"?>
                 <testsuites name="eigengate" tests="3" failures="1" errors="0">
                   <testsuite name="eigengate.normalisation" tests="2" failures="1" errors="0" skipped="0">
-                    <testcase classname="eigengate.normalisation" name="form f&lt;1&gt;">
+                    <testcase classname="eigengate.normalisation" name="data: form f&lt;1&gt;">
                       <failure message="data/c.csv:4: error [normalisation] form=f&lt;1&gt; n=1: expected 1, found 2; \
                 a newform is normalised so that a_1 = 1" type="normalisation">data/c.csv:4: error [normalisation] \
                 form=f&lt;1&gt; n=1: expected 1, found 2; a newform is normalised so that a_1 = 1</failure>
                     </testcase>
-                    <testcase classname="eigengate.normalisation" name="form g"/>
+                    <testcase classname="eigengate.normalisation" name="data: form g"/>
                   </testsuite>
                   <testsuite name="eigengate.table-format" tests="1" failures="0" errors="0" skipped="0">
-                    <testcase classname="eigengate.table-format" name="table data/c.csv">
+                    <testcase classname="eigengate.table-format" name="data: table data/c.csv">
                       <system-out>data/c.csv:1:4: warning [table-format] table=data/c.csv: expected one of \
                 form,n,value, found x "y"; unknown column 'x "y"' is ignored</system-out>
                     </testcase>

@@ -13,6 +13,7 @@ import io.github.eigengate.data.Form;
 import io.github.eigengate.data.FormData;
 import io.github.eigengate.data.Problems;
 import io.github.eigengate.data.TableRow;
+import io.github.eigengate.data.Tables;
 import io.github.eigengate.theory.Arith;
 import io.github.eigengate.theory.congruence.CongruenceBounds.Plan;
 import java.io.IOException;
@@ -239,6 +240,8 @@ abstract class ClaimPass implements Check.Pass {
     final void conclude(FindingSink out, String check, TableRow row, Subject subject, String claimText, Plan plan,
                         long x, Set<Long> excluded, Supplier<Certificate> certificate) {
         BigInteger b = plan.bound();
+        out.measure(check, subject, "bound", b.toString());
+        out.measure(check, subject, "reached", Long.toString(x));
         if (BigInteger.valueOf(x).compareTo(b) < 0) {
             notCertified(out, check, row, subject, "a_l for every prime l <= B = " + b,
                     "the tables stop at l = " + x,
@@ -295,12 +298,21 @@ abstract class ClaimPass implements Check.Pass {
         return name;
     }
 
-    /** {@code sha256  <file>} lines for forms.csv and every coefficient file of the dataset. */
+    /**
+     * {@code sha256  <file>} lines for forms.csv, every coefficient file and the claim tables (congruences.csv,
+     * reducible.csv) present in the dataset.
+     */
     final String checksums() {
         StringBuilder b = new StringBuilder();
         List<Path> files = new ArrayList<>();
         files.add(catalog.directory().resolve("forms.csv"));
         files.addAll(catalog.coefficientFiles());
+        for (String claims : List.of(Tables.CONGRUENCES, Tables.REDUCIBLE)) {
+            Path file = catalog.directory().resolve(claims);
+            if (Files.isRegularFile(file)) {
+                files.add(file);
+            }
+        }
         for (Path file : files) {
             Path base = catalog.directory().toAbsolutePath().normalize();
             b.append("sha256 ").append(sha256(file)).append("  ")

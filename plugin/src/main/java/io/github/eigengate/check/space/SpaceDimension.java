@@ -82,6 +82,8 @@ public final class SpaceDimension implements Check {
             sum += f.degree();
             parts.add(f.id() + ":" + f.degree());
         }
+        out.measure(ID, subject, "formula", Long.toString(dim));
+        out.measure(ID, subject, "found", Long.toString(sum));
         if (sum != dim) {
             String listing = parts.isEmpty() ? "no forms" : String.join(", ", parts);
             out.error(ID, row.location(), subject, expected,
