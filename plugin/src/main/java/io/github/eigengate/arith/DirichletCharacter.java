@@ -35,6 +35,15 @@ public final class DirichletCharacter {
 
     private DirichletCharacter(int modulus, Component[] components, int[] rawExponent, int rawOrder) {
         this.modulus = modulus;
+        boolean trivial = true;
+        for (int e : rawExponent) {
+            trivial &= (long) e % rawOrder == 0;
+        }
+        if (trivial) {
+            // canonical: the trivial character keeps no generators, so it equals trivial(N) however it was given
+            components = new Component[0];
+            rawExponent = new int[0];
+        }
         this.components = components;
         // reduce to the exact order: m = lcm over i of rawOrder / gcd(rawOrder, e_i)
         long m = 1;

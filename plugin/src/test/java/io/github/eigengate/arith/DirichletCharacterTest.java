@@ -62,6 +62,13 @@ class DirichletCharacterTest {
     }
 
     @Test
+    void aTrivialCharacterGivenByValuesEqualsTheTrivialOne() {
+        assertEquals(DirichletCharacter.trivial(13), of(13, new long[] {2}, new long[] {0}, new long[] {1}));
+        assertEquals(DirichletCharacter.trivial(20), of(20, new long[] {11, 17}, new long[] {2, 3}, new long[] {2, 3}));
+        assertEquals("1", of(13, new long[] {2}, new long[] {6}, new long[] {6}).cell());
+    }
+
+    @Test
     void inconsistentOrNonGeneratingValuesAreRejected() {
         // 4 = 2^2 mod 13 so χ(4) must be χ(2)^2
         assertThrows(IllegalArgumentException.class,

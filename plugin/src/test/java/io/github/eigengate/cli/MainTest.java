@@ -70,7 +70,7 @@ class MainTest {
         Run r = run("data");
         assertEquals(0, r.code(), r.err());
         assertEquals(List.of("[INFO] eigengate: 0 errors, 0 warnings, 0 notes in 1 dataset (3 forms, 450 coefficient "
-                + "rows, 13 checks)", "[INFO] eigengate: report in target/eigengate/report.html"), r.lines());
+                + "rows, 22 checks)", "[INFO] eigengate: report in target/eigengate/report.html"), r.lines());
         for (String f : List.of("report.html", "report.json", "TEST-eigengate.xml")) {
             assertTrue(Files.isRegularFile(dir.resolve("target/eigengate").resolve(f)), f);
         }
@@ -82,12 +82,12 @@ class MainTest {
         demo("data", true);
         Run r = run("data");
         assertEquals(1, r.code());
-        assertEquals("[ERROR] eigengate: 12 errors, 0 warnings, 0 notes in 1 dataset (3 forms, 450 coefficient rows, "
-                + "13 checks)", r.lines().get(0));
+        assertEquals("[ERROR] eigengate: 10 errors, 0 warnings, 0 notes in 1 dataset (3 forms, 450 coefficient rows, "
+                + "22 checks)", r.lines().get(0));
         assertTrue(r.lines().contains("[ERROR] data/coefficients.csv:12: error [ramanujan-bound] form=lev11_wt2_o1 "
                 + "n=7: expected a_p^2 <= 4*p^(k-1) = 28, found a_p^2 = 81; Deligne's bound |a_p| <= 2 p^((k-1)/2) "
                 + "fails at p=7"), r.out());
-        assertEquals("[ERROR] eigengate: report in target/eigengate/report.html", r.lines().get(13));
+        assertEquals("[ERROR] eigengate: report in target/eigengate/report.html", r.lines().get(11));
     }
 
     @Test
@@ -98,8 +98,8 @@ class MainTest {
         MojoRunner.set(mojo, "outputDirectory", dir.resolve("mvn-out").toFile());
         List<String> mvn = MojoRunner.capture(mojo);
         assertThrows(MojoFailureException.class, mojo::execute);
-        assertEquals(13, mvn.size());
-        assertEquals(mvn, cli.lines().subList(0, 13));
+        assertEquals(11, mvn.size());
+        assertEquals(mvn, cli.lines().subList(0, 11));
     }
 
     @Test
@@ -152,13 +152,13 @@ class MainTest {
         demo("data", true);
         Run skipped = run("--skip-checks", "hecke-relations,space-traces", "--out", "elsewhere", "data");
         assertEquals(1, skipped.code());
-        assertEquals("[ERROR] eigengate: 1 error, 0 warnings, 0 notes in 1 dataset (3 forms, 450 coefficient rows, "
-                + "11 checks)", skipped.lines().get(0));
+        assertEquals("[ERROR] eigengate: 3 errors, 0 warnings, 0 notes in 1 dataset (3 forms, 450 coefficient rows, "
+                + "20 checks)", skipped.lines().get(0));
         assertTrue(Files.isRegularFile(dir.resolve("elsewhere/report.html")));
 
         Run capped = run("--max-findings", "2", "--out", "capped", "data");
-        assertEquals("[ERROR] eigengate: 12 errors, 0 warnings, 0 notes in 1 dataset (3 forms, 450 coefficient rows, "
-                + "13 checks); 10 findings beyond the first 2 are counted but not listed", capped.lines().get(0));
+        assertEquals("[ERROR] eigengate: 10 errors, 0 warnings, 0 notes in 1 dataset (3 forms, 450 coefficient rows, "
+                + "22 checks); 8 findings beyond the first 2 are counted but not listed", capped.lines().get(0));
         assertEquals(4, capped.lines().size());
 
         Run json = run("--format", "json", "--out", "json-only", "data");
