@@ -399,7 +399,10 @@ public final class RealRoots {
             im[k] = radius * Math.sin(a);
         }
         double worst = Double.POSITIVE_INFINITY;
-        for (int it = 0; it < 500 && worst >= 1e-14; it++) {
+        int stalled = 0; // iterations without progress: rounding noise reached
+        int it = 0;
+        for (; it < 300 && worst >= 1e-13 && stalled < 4; it++) {
+            double before = worst;
             worst = 0;
             for (int k = 0; k < n; k++) {
                 double zr = re[k];
@@ -457,12 +460,13 @@ public final class RealRoots {
             if (!Double.isFinite(worst)) {
                 return null;
             }
+            stalled = worst > before * 0.7 && worst < 1e-3 ? stalled + 1 : 0;
         }
-        if (worst > 1e-6) {
+        if (worst > 1e-3) {
             return null; // not settled: no proposal (the exact count decides)
         }
         for (int k = 0; k < n; k++) {
-            if (Math.abs(im[k]) > 1e-6 * Math.max(1, Math.abs(re[k]))) {
+            if (Math.abs(im[k]) > 1e-2 * Math.max(1, Math.abs(re[k]))) {
                 return null; // clearly not real: the exact count will say no
             }
         }
