@@ -20,7 +20,7 @@ final class Level32Form {
                 continue;
             }
             long xx = (long) x * x;
-            for (int y = -r; y <= r; y += 2) {
+            for (int y = -2 * (r / 2); y <= r; y += 2) { // b even
                 long n = xx + (long) y * y;
                 if (n > max || Math.floorMod(x + y, 4) != 1) {
                     continue;
