@@ -31,6 +31,7 @@ public final class NumberField extends ElementField<NumberField.Element> {
     private final BigInteger fDen;
     /** {@code traceOfPower[i] = Tr(x^i)} for {@code 0 <= i < d}. */
     private final Rational[] traceOfPower;
+    private final BigInteger[] integralTraces; // Tr(x^k), k < d, when f is monic integral; else null
     private final Element zero;
     private final Element one;
 
@@ -79,12 +80,51 @@ public final class NumberField extends ElementField<NumberField.Element> {
             s[k] = acc.negate();
         }
         this.traceOfPower = s;
+        BigInteger[] it = null;
+        if (fd.equals(BigInteger.ONE)) { // monic integral f: the traces of the powers of x are integers
+            it = new BigInteger[d];
+            for (int k = 0; k < d; k++) {
+                it[k] = s[k].num();
+            }
+        }
+        this.integralTraces = it;
         BigInteger[] z = new BigInteger[d];
         Arrays.fill(z, BigInteger.ZERO);
         this.zero = new Element(this, z, BigInteger.ONE);
         BigInteger[] o = z.clone();
         o[0] = BigInteger.ONE;
         this.one = new Element(this, o, BigInteger.ONE);
+    }
+
+    /**
+     * The product of two integral coordinate vectors in Z[x]/(f), for f monic integral (then the reduction rows are
+     * integral): no common denominator and no gcd.
+     */
+    private BigInteger[] multiplyIntegral(BigInteger[] a, BigInteger[] b) {
+        return reduceByF(ZPoly.multiply(a, b));
+    }
+
+    /**
+     * p mod f for f monic integral, by synthetic division from the top: x^k = x^(k-d) (x^d − f) + …, each step
+     * multiplying by the (small) coefficients of f rather than by the reduction rows of x^(d+k), which grow with k.
+     */
+    private BigInteger[] reduceByF(BigInteger[] p) {
+        BigInteger[] r = Arrays.copyOf(p, Math.max(p.length, d));
+        for (int k = p.length; k < d; k++) {
+            r[k] = BigInteger.ZERO;
+        }
+        for (int k = p.length - 1; k >= d; k--) {
+            BigInteger t = r[k];
+            if (t.signum() == 0) {
+                continue;
+            }
+            for (int j = 0; j < d; j++) {
+                if (fNum[j].signum() != 0) {
+                    r[k - d + j] = r[k - d + j].subtract(t.multiply(fNum[j]));
+                }
+            }
+        }
+        return r.length == d ? r : Arrays.copyOf(r, d);
     }
 
     private static Rational[] timesX(Rational[] v, Rational[] lower) {
@@ -355,6 +395,9 @@ public final class NumberField extends ElementField<NumberField.Element> {
             if (p.length == 0) {
                 return field.zero;
             }
+            if (field.integralTraces != null) { // monic integral f: reduce by f itself, small multipliers
+                return field.make(field.reduceByF(p), den.multiply(o.den));
+            }
             BigInteger[] r = new BigInteger[d];
             boolean scaled = !field.redDen.equals(BigInteger.ONE);
             for (int j = 0; j < d; j++) {
@@ -527,6 +570,9 @@ public final class NumberField extends ElementField<NumberField.Element> {
         }
 
         private QPoly newtonCharPoly() {
+            if (field.fDen.equals(BigInteger.ONE) && den.equals(BigInteger.ONE) && num.length > 1) {
+                return integralNewtonCharPoly();
+            }
             int d = num.length;
             Rational[] ps = new Rational[d + 1];
             Element power = this;
@@ -550,6 +596,48 @@ public final class NumberField extends ElementField<NumberField.Element> {
             Rational[] c = new Rational[d + 1];
             for (int k = 0; k <= d; k++) {
                 c[d - k] = k % 2 == 0 ? e[k] : e[k].negate();
+            }
+            return QPoly.of(c);
+        }
+
+        /**
+         * Newton's identities over Z when f is monic integral: A = den·a has integer coordinates, so the power sums
+         * P_k = Tr(A^k) and the coefficients E_k of χ_A are integers, computed with no gcd at all (k E_k = Σ_{i=1}^{k}
+         * (−1)^(i−1) E_{k−i} P_i divides exactly); χ_a(X) = den^(−d) χ_A(den X) is formed once at the end.
+         */
+        private QPoly integralNewtonCharPoly() {
+            int d = num.length;
+            BigInteger[] s = field.integralTraces;
+            BigInteger[] p = new BigInteger[d + 1];
+            BigInteger[] power = num;
+            for (int k = 1; k <= d; k++) {
+                BigInteger acc = BigInteger.ZERO;
+                for (int j = 0; j < d; j++) {
+                    if (power[j].signum() != 0 && s[j].signum() != 0) {
+                        acc = acc.add(power[j].multiply(s[j]));
+                    }
+                }
+                p[k] = acc;
+                if (k < d) {
+                    power = field.multiplyIntegral(power, num);
+                }
+            }
+            BigInteger[] e = new BigInteger[d + 1];
+            e[0] = BigInteger.ONE;
+            for (int k = 1; k <= d; k++) {
+                BigInteger acc = BigInteger.ZERO;
+                for (int i = 1; i <= k; i++) {
+                    BigInteger t = e[k - i].multiply(p[i]);
+                    acc = (i % 2 == 1) ? acc.add(t) : acc.subtract(t);
+                }
+                e[k] = acc.divide(BigInteger.valueOf(k));
+            }
+            Rational[] c = new Rational[d + 1];
+            BigInteger denPow = BigInteger.ONE;
+            for (int k = 0; k <= d; k++) {
+                BigInteger ek = k % 2 == 0 ? e[k] : e[k].negate();
+                c[d - k] = den.equals(BigInteger.ONE) ? Rational.of(ek) : Rational.of(ek, denPow);
+                denPow = denPow.multiply(den);
             }
             return QPoly.of(c);
         }
