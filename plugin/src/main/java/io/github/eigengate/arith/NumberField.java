@@ -96,6 +96,25 @@ public final class NumberField extends ElementField<NumberField.Element> {
         this.one = new Element(this, o, BigInteger.ONE);
     }
 
+    private volatile BigInteger[] hankel;
+
+    /** Tr(x^m) for 0 ≤ m ≤ 2d − 2, f monic integral (Newton's identities for the power sums of the roots of f). */
+    private BigInteger[] hankelTraces() {
+        BigInteger[] t = hankel;
+        if (t == null) {
+            t = Arrays.copyOf(integralTraces, 2 * d - 1);
+            for (int m = d; m < 2 * d - 1; m++) {
+                BigInteger acc = BigInteger.ZERO; // s_m = −Σ_{i=1}^{d} f_{d−i} s_{m−i}
+                for (int i = 1; i <= d; i++) {
+                    acc = acc.add(fNum[d - i].multiply(t[m - i]));
+                }
+                t[m] = acc.negate();
+            }
+            hankel = t;
+        }
+        return t;
+    }
+
     /**
      * The product of two integral coordinate vectors in Z[x]/(f), for f monic integral (then the reduction rows are
      * integral): no common denominator and no gcd.
@@ -575,11 +594,15 @@ public final class NumberField extends ElementField<NumberField.Element> {
             }
             int d = num.length;
             Rational[] ps = new Rational[d + 1];
-            Element power = this;
-            for (int k = 1; k <= d; k++) {
-                ps[k] = power.trace();
-                if (k < d) {
-                    power = power.multiply(this);
+            if (field.integralTraces != null && d > 1) {
+                powerSumsKeepingTheDenominator(ps);
+            } else {
+                Element power = this;
+                for (int k = 1; k <= d; k++) {
+                    ps[k] = power.trace();
+                    if (k < d) {
+                        power = power.multiply(this);
+                    }
                 }
             }
             Rational[] e = new Rational[d + 1];
@@ -598,6 +621,81 @@ public final class NumberField extends ElementField<NumberField.Element> {
                 c[d - k] = k % 2 == 0 ? e[k] : e[k].negate();
             }
             return QPoly.of(c);
+        }
+
+        /**
+         * ps[k] = Tr(a^k), 1 ≤ k ≤ d, for f monic integral, with a^k kept as N_k / D and no gcd per product: the
+         * product N_k · num is divided exactly by den when den divides every coordinate (then a^(k+1) = N_(k+1) / D
+         * with the same D — the usual case, since the denominators of the powers of an algebraic integer are bounded)
+         * and normalised by a gcd only when it does not.
+         */
+        private void powerSumsKeepingTheDenominator(Rational[] ps) {
+            int d = num.length;
+            BigInteger[] s = field.hankelTraces();
+            int h = (d + 1) / 2;
+            BigInteger[][] pn = new BigInteger[h + 1][];
+            BigInteger[] pd = new BigInteger[h + 1];
+            pn[1] = num;
+            pd[1] = den;
+            for (int k = 1; k < h; k++) {
+                BigInteger[] r = field.multiplyIntegral(pn[k], num); // a^(k+1) = r / (pd · den)
+                BigInteger[] q = den.equals(BigInteger.ONE) ? r : exactQuotients(r, den);
+                if (q != null) {
+                    pn[k + 1] = q;
+                    pd[k + 1] = pd[k];
+                } else {
+                    Element reduced = field.make(r, pd[k].multiply(den));
+                    pn[k + 1] = reduced.num;
+                    pd[k + 1] = reduced.den;
+                }
+            }
+            // Tr(a^i a^j) = u_i^T H u_j / (pd_i pd_j) with the Hankel matrix H = (Tr(x^(r+c)))
+            BigInteger[][] w = new BigInteger[h + 1][];
+            for (int k = 1; k <= d; k++) {
+                int i = k / 2;
+                int j = k - i;
+                if (w[j] == null) {
+                    w[j] = new BigInteger[d];
+                    for (int r = 0; r < d; r++) {
+                        BigInteger acc = BigInteger.ZERO;
+                        for (int c = 0; c < d; c++) {
+                            if (pn[j][c].signum() != 0 && s[r + c].signum() != 0) {
+                                acc = acc.add(pn[j][c].multiply(s[r + c]));
+                            }
+                        }
+                        w[j][r] = acc;
+                    }
+                }
+                BigInteger acc = BigInteger.ZERO;
+                if (i == 0) {
+                    acc = w[j][0]; // Tr(a^j) = e_0^T H u_j
+                    ps[k] = Rational.of(acc, pd[j]);
+                    continue;
+                }
+                for (int r = 0; r < d; r++) {
+                    if (pn[i][r].signum() != 0) {
+                        acc = acc.add(pn[i][r].multiply(w[j][r]));
+                    }
+                }
+                ps[k] = Rational.of(acc, pd[i].multiply(pd[j]));
+            }
+        }
+
+        /** r / m coordinate-wise when m divides every coordinate, else null. */
+        private static BigInteger[] exactQuotients(BigInteger[] r, BigInteger m) {
+            BigInteger[] q = new BigInteger[r.length];
+            for (int j = 0; j < r.length; j++) {
+                if (r[j].signum() == 0) {
+                    q[j] = BigInteger.ZERO;
+                    continue;
+                }
+                BigInteger[] qr = r[j].divideAndRemainder(m);
+                if (qr[1].signum() != 0) {
+                    return null;
+                }
+                q[j] = qr[0];
+            }
+            return q;
         }
 
         /**
