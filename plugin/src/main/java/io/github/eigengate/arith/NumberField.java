@@ -31,6 +31,7 @@ public final class NumberField extends ElementField<NumberField.Element> {
     private final BigInteger fDen;
     /** {@code traceOfPower[i] = Tr(x^i)} for {@code 0 <= i < d}. */
     private final Rational[] traceOfPower;
+    private final BigInteger[] integralTraces; // Tr(x^k), k < d, when f is monic integral; else null
     private final Element zero;
     private final Element one;
 
@@ -79,12 +80,70 @@ public final class NumberField extends ElementField<NumberField.Element> {
             s[k] = acc.negate();
         }
         this.traceOfPower = s;
+        BigInteger[] it = null;
+        if (fd.equals(BigInteger.ONE)) { // monic integral f: the traces of the powers of x are integers
+            it = new BigInteger[d];
+            for (int k = 0; k < d; k++) {
+                it[k] = s[k].num();
+            }
+        }
+        this.integralTraces = it;
         BigInteger[] z = new BigInteger[d];
         Arrays.fill(z, BigInteger.ZERO);
         this.zero = new Element(this, z, BigInteger.ONE);
         BigInteger[] o = z.clone();
         o[0] = BigInteger.ONE;
         this.one = new Element(this, o, BigInteger.ONE);
+    }
+
+    private volatile BigInteger[] hankel;
+
+    /** Tr(x^m) for 0 ≤ m ≤ 2d − 2, f monic integral (Newton's identities for the power sums of the roots of f). */
+    private BigInteger[] hankelTraces() {
+        BigInteger[] t = hankel;
+        if (t == null) {
+            t = Arrays.copyOf(integralTraces, 2 * d - 1);
+            for (int m = d; m < 2 * d - 1; m++) {
+                BigInteger acc = BigInteger.ZERO; // s_m = −Σ_{i=1}^{d} f_{d−i} s_{m−i}
+                for (int i = 1; i <= d; i++) {
+                    acc = acc.add(fNum[d - i].multiply(t[m - i]));
+                }
+                t[m] = acc.negate();
+            }
+            hankel = t;
+        }
+        return t;
+    }
+
+    /**
+     * The product of two integral coordinate vectors in Z[x]/(f), for f monic integral (then the reduction rows are
+     * integral): no common denominator and no gcd.
+     */
+    private BigInteger[] multiplyIntegral(BigInteger[] a, BigInteger[] b) {
+        return reduceByF(ZPoly.multiply(a, b));
+    }
+
+    /**
+     * p mod f for f monic integral, by synthetic division from the top: x^k = x^(k-d) (x^d − f) + …, each step
+     * multiplying by the (small) coefficients of f rather than by the reduction rows of x^(d+k), which grow with k.
+     */
+    private BigInteger[] reduceByF(BigInteger[] p) {
+        BigInteger[] r = Arrays.copyOf(p, Math.max(p.length, d));
+        for (int k = p.length; k < d; k++) {
+            r[k] = BigInteger.ZERO;
+        }
+        for (int k = p.length - 1; k >= d; k--) {
+            BigInteger t = r[k];
+            if (t.signum() == 0) {
+                continue;
+            }
+            for (int j = 0; j < d; j++) {
+                if (fNum[j].signum() != 0) {
+                    r[k - d + j] = r[k - d + j].subtract(t.multiply(fNum[j]));
+                }
+            }
+        }
+        return r.length == d ? r : Arrays.copyOf(r, d);
     }
 
     private static Rational[] timesX(Rational[] v, Rational[] lower) {
@@ -355,6 +414,9 @@ public final class NumberField extends ElementField<NumberField.Element> {
             if (p.length == 0) {
                 return field.zero;
             }
+            if (field.integralTraces != null) { // monic integral f: reduce by f itself, small multipliers
+                return field.make(field.reduceByF(p), den.multiply(o.den));
+            }
             BigInteger[] r = new BigInteger[d];
             boolean scaled = !field.redDen.equals(BigInteger.ONE);
             for (int j = 0; j < d; j++) {
@@ -527,13 +589,20 @@ public final class NumberField extends ElementField<NumberField.Element> {
         }
 
         private QPoly newtonCharPoly() {
+            if (field.fDen.equals(BigInteger.ONE) && den.equals(BigInteger.ONE) && num.length > 1) {
+                return integralNewtonCharPoly();
+            }
             int d = num.length;
             Rational[] ps = new Rational[d + 1];
-            Element power = this;
-            for (int k = 1; k <= d; k++) {
-                ps[k] = power.trace();
-                if (k < d) {
-                    power = power.multiply(this);
+            if (field.integralTraces != null && d > 1) {
+                powerSumsKeepingTheDenominator(ps);
+            } else {
+                Element power = this;
+                for (int k = 1; k <= d; k++) {
+                    ps[k] = power.trace();
+                    if (k < d) {
+                        power = power.multiply(this);
+                    }
                 }
             }
             Rational[] e = new Rational[d + 1];
@@ -550,6 +619,123 @@ public final class NumberField extends ElementField<NumberField.Element> {
             Rational[] c = new Rational[d + 1];
             for (int k = 0; k <= d; k++) {
                 c[d - k] = k % 2 == 0 ? e[k] : e[k].negate();
+            }
+            return QPoly.of(c);
+        }
+
+        /**
+         * ps[k] = Tr(a^k), 1 ≤ k ≤ d, for f monic integral, with a^k kept as N_k / D and no gcd per product: the
+         * product N_k · num is divided exactly by den when den divides every coordinate (then a^(k+1) = N_(k+1) / D
+         * with the same D — the usual case, since the denominators of the powers of an algebraic integer are bounded)
+         * and normalised by a gcd only when it does not.
+         */
+        private void powerSumsKeepingTheDenominator(Rational[] ps) {
+            int d = num.length;
+            BigInteger[] s = field.hankelTraces();
+            int h = (d + 1) / 2;
+            BigInteger[][] pn = new BigInteger[h + 1][];
+            BigInteger[] pd = new BigInteger[h + 1];
+            pn[1] = num;
+            pd[1] = den;
+            for (int k = 1; k < h; k++) {
+                BigInteger[] r = field.multiplyIntegral(pn[k], num); // a^(k+1) = r / (pd · den)
+                BigInteger[] q = den.equals(BigInteger.ONE) ? r : exactQuotients(r, den);
+                if (q != null) {
+                    pn[k + 1] = q;
+                    pd[k + 1] = pd[k];
+                } else {
+                    Element reduced = field.make(r, pd[k].multiply(den));
+                    pn[k + 1] = reduced.num;
+                    pd[k + 1] = reduced.den;
+                }
+            }
+            // Tr(a^i a^j) = u_i^T H u_j / (pd_i pd_j) with the Hankel matrix H = (Tr(x^(r+c)))
+            BigInteger[][] w = new BigInteger[h + 1][];
+            for (int k = 1; k <= d; k++) {
+                int i = k / 2;
+                int j = k - i;
+                if (w[j] == null) {
+                    w[j] = new BigInteger[d];
+                    for (int r = 0; r < d; r++) {
+                        BigInteger acc = BigInteger.ZERO;
+                        for (int c = 0; c < d; c++) {
+                            if (pn[j][c].signum() != 0 && s[r + c].signum() != 0) {
+                                acc = acc.add(pn[j][c].multiply(s[r + c]));
+                            }
+                        }
+                        w[j][r] = acc;
+                    }
+                }
+                BigInteger acc = BigInteger.ZERO;
+                if (i == 0) {
+                    acc = w[j][0]; // Tr(a^j) = e_0^T H u_j
+                    ps[k] = Rational.of(acc, pd[j]);
+                    continue;
+                }
+                for (int r = 0; r < d; r++) {
+                    if (pn[i][r].signum() != 0) {
+                        acc = acc.add(pn[i][r].multiply(w[j][r]));
+                    }
+                }
+                ps[k] = Rational.of(acc, pd[i].multiply(pd[j]));
+            }
+        }
+
+        /** r / m coordinate-wise when m divides every coordinate, else null. */
+        private static BigInteger[] exactQuotients(BigInteger[] r, BigInteger m) {
+            BigInteger[] q = new BigInteger[r.length];
+            for (int j = 0; j < r.length; j++) {
+                if (r[j].signum() == 0) {
+                    q[j] = BigInteger.ZERO;
+                    continue;
+                }
+                BigInteger[] qr = r[j].divideAndRemainder(m);
+                if (qr[1].signum() != 0) {
+                    return null;
+                }
+                q[j] = qr[0];
+            }
+            return q;
+        }
+
+        /**
+         * Newton's identities over Z when f is monic integral: A = den·a has integer coordinates, so the power sums
+         * P_k = Tr(A^k) and the coefficients E_k of χ_A are integers, computed with no gcd at all (k E_k = Σ_{i=1}^{k}
+         * (−1)^(i−1) E_{k−i} P_i divides exactly); χ_a(X) = den^(−d) χ_A(den X) is formed once at the end.
+         */
+        private QPoly integralNewtonCharPoly() {
+            int d = num.length;
+            BigInteger[] s = field.integralTraces;
+            BigInteger[] p = new BigInteger[d + 1];
+            BigInteger[] power = num;
+            for (int k = 1; k <= d; k++) {
+                BigInteger acc = BigInteger.ZERO;
+                for (int j = 0; j < d; j++) {
+                    if (power[j].signum() != 0 && s[j].signum() != 0) {
+                        acc = acc.add(power[j].multiply(s[j]));
+                    }
+                }
+                p[k] = acc;
+                if (k < d) {
+                    power = field.multiplyIntegral(power, num);
+                }
+            }
+            BigInteger[] e = new BigInteger[d + 1];
+            e[0] = BigInteger.ONE;
+            for (int k = 1; k <= d; k++) {
+                BigInteger acc = BigInteger.ZERO;
+                for (int i = 1; i <= k; i++) {
+                    BigInteger t = e[k - i].multiply(p[i]);
+                    acc = (i % 2 == 1) ? acc.add(t) : acc.subtract(t);
+                }
+                e[k] = acc.divide(BigInteger.valueOf(k));
+            }
+            Rational[] c = new Rational[d + 1];
+            BigInteger denPow = BigInteger.ONE;
+            for (int k = 0; k <= d; k++) {
+                BigInteger ek = k % 2 == 0 ? e[k] : e[k].negate();
+                c[d - k] = den.equals(BigInteger.ONE) ? Rational.of(ek) : Rational.of(ek, denPow);
+                denPow = denPow.multiply(den);
             }
             return QPoly.of(c);
         }

@@ -164,24 +164,30 @@ public final class CoefficientReader {
         }
 
         void add(int n, String text, CsvTable.Row row, String file) {
-            String subject = "form=" + form.id() + " n=" + n;
+            if (form.rational()) {
+                long small = Cells.smallInteger(text);
+                if (small != Long.MIN_VALUE && !builder.has(n)) { // the common row: no allocation
+                    builder.putInteger(n, small, file, row.line());
+                    return;
+                }
+            }
             if (text.isEmpty()) {
-                problems.error(row.at("value"), subject, expectation(form), "an empty cell", "a_" + n + " is missing");
+                problems.error(row.at("value"), subject(n), expectation(form), "an empty cell", "a_" + n + " is missing");
                 return;
             }
             if (Cells.splitsDigits(text)) {
-                problems.error(row.at("value"), subject, expectation(form), text,
+                problems.error(row.at("value"), subject(n), expectation(form), text,
                         "whitespace separates two digits; write the number without it");
                 return;
             }
             if (text.startsWith("[") && !text.endsWith("]") && row.size() > row.width()) {
-                problems.error(row.at("value"), subject, expectation(form), text,
+                problems.error(row.at("value"), subject(n), expectation(form), text,
                         "the vector was split at its commas: quote the cell, e.g. \"[1, 2]\"");
                 return;
             }
             Object parsed = parser.parse(text, form);
             if (parsed instanceof String problem) {
-                problems.error(row.at("value"), subject, expectation(form), text, problem);
+                problems.error(row.at("value"), subject(n), expectation(form), text, problem);
                 return;
             }
             @SuppressWarnings("unchecked")
@@ -190,15 +196,20 @@ public final class CoefficientReader {
             if (before != null) {
                 SourceLocation first = builder.at(n);
                 if (before.equals(value)) {
-                    problems.warning(row.at("value"), subject, "each (form, n) once", text,
+                    problems.warning(row.at("value"), subject(n), "each (form, n) once", text,
                             "a_" + n + " is given again with the same value (first at " + first + ")");
                 } else {
-                    problems.error(row.at("value"), subject, before.toString(), text,
+                    problems.error(row.at("value"), subject(n), before.toString(), text,
                             "a_" + n + " is given twice with different values (first at " + first + ")");
                 }
                 return;
             }
             builder.put(n, value, file, row.line());
+        }
+
+        /** The subject of a finding about a_n, made only when there is one. */
+        private String subject(int n) {
+            return "form=" + form.id() + " n=" + n;
         }
 
         FormData<E> finish() {
