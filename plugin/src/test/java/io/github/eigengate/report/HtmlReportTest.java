@@ -46,8 +46,8 @@ class HtmlReportTest {
         List<Element> rows = d.select("#findings-table tr.eg-finding");
         assertEquals(10, rows.size());
         Element deligne = d.selectFirst("tr.eg-finding[data-check=ramanujan-bound]");
-        assertEquals("finding-11", deligne.id());
-        assertEquals("11 error ramanujan-bound data/coefficients.csv:12 form=lev11_wt2_o1 n=7 a_p^2 <= 4*p^(k-1) = 28 "
+        assertEquals("finding-7", deligne.id());
+        assertEquals("7 error ramanujan-bound data/coefficients.csv:12 form=lev11_wt2_o1 n=7 a_p^2 <= 4*p^(k-1) = 28 "
                 + "a_p^2 = 81 Deligne's bound |a_p| <= 2 p^((k-1)/2) fails at p=7", deligne.text());
         assertEquals("#form-data--lev11_5f_wt2_5f_o1", deligne.selectFirst("td.eg-subject a").attr("href"));
         assertEquals("error", deligne.attr("data-severity"));
