@@ -155,7 +155,7 @@ project('space-missing-orbit', 'A declared space with an orbit missing fails the
 project('space-character-fail', 'spaces.csv rows with characters: a Galois orbit with no forms, a malformed character, a weight of the wrong parity, weight 1.',
         {'data/forms.csv': FORMS, 'data/coefficients.csv': coeffs(),
          'data/spaces.csv': '# S_2(Gamma0(11)) is complete; S_2(13, chi of order 6) is not; two malformed rows; weight 1 cannot be checked\nlevel,weight,character\n11,2,\n13,2,2:1/6\n13,4,2:1/5\n7,2,3:1/2\n23,1,5:1/2\n'},
-        ['[ERROR] data/spaces.csv:5:3: error [table-format] space=line 5: expected empty, 1, or g:a/b pairs joined by \';\' with units 1 < g < N that generate (Z/NZ)^×, found 2:1/5; the character cannot be read: the values are not those of a character: two products of the generators equal 1 mod 13 but get different values',
+        ['[ERROR] data/spaces.csv:5:3: error [table-format] space=line 5: expected empty, 1, or g:a/b pairs joined by \';\' with units 1 < g < N that generate (Z/NZ)^×, found 2:1/5; the character cannot be read: χ(2) = exp(2πi·1/5) has order 5, which does not divide the order 12 of 2 mod 13',
          '[ERROR] data/spaces.csv:6:2: error [table-format] space=line 6: expected an odd weight (χ(−1) = -1 = (−1)^k), found 2; S_k(N, χ) = 0 unless χ(−1) = (−1)^k, since −I ∈ Γ0(N) acts on it by χ(−1)(−1)^k',
          '[ERROR] data/spaces.csv:4: error [space-dimension] space=N=13 k=2 χ=2:1/6: expected [Q(χ):Q]·dim S_k^new(N, χ) = 2·1 = 2, found sum of field degrees = 0 (no forms); the declared forms do not fill the new subspace: an orbit is missing (or a field is too small)',
          '[INFO] data/spaces.csv:7: note [space-dimension] space=N=23 k=1 χ=5:1/2: completeness of weight 1 not checkable: no formula gives dim S_1(N, χ), so the listing is neither passed nor failed'],
@@ -298,8 +298,8 @@ project('curves-pass', 'Curves with the right conductor, a_p and torsion pass, a
         {'data/forms.csv': FORMS_EC, 'data/coefficients.csv': coeffs_ec(), 'data/curves.csv': curves_ec(EC_GOOD)},
         ['[INFO] eigengate: 0 errors, 0 warnings, 0 notes in 1 dataset (2 forms, 40 coefficient rows'],
         fail=False, extra_verify='''def xml = new File(basedir, "target/eigengate/TEST-eigengate.xml").getText("UTF-8")
-assert xml.contains('<testcase classname="eigengate.curve-traces" name="form f11"/>')
-assert xml.contains('<testcase classname="eigengate.curve-conductor" name="form f37"/>')
+assert xml.contains('<testcase classname="eigengate.curve-traces" name="data: form f11"/>')
+assert xml.contains('<testcase classname="eigengate.curve-conductor" name="data: form f37"/>')
 ''')
 project('curves-twist-fail',
         'The quadratic twist by -4 of the right curve fails the traces check, which names the twist, and the conductor check (PARI/GP: ellminimalmodel(ellinit(elltwist(ellinit([0,-1,1,-10,-20]), -4))) = [0,1,0,-165,1427], conductor 176).',
@@ -395,7 +395,7 @@ project('fail-on-error-false-reports-only', 'failOnError=false reports the error
         {'data/forms.csv': FORMS, 'data/coefficients.csv': coeffs(l11=bad),
          'invoker.properties': 'invoker.goals = verify -Deigengate.failOnError=false\ninvoker.buildResult = success\n'},
         ['[ERROR] data/coefficients.csv:4: error [normalisation] form=lev11_wt2_o1 n=1: expected 1, found 2',
-         '[WARNING] eigengate: failOnError is false: the build goes on despite 3 errors (listed above; full report in target/eigengate/report.html)'],
+         '[WARNING] eigengate: failOnError is false: the build goes on despite 1 error (listed above; full report in target/eigengate/report.html)'],
         fail=False)
 FORMS_EXTRA = FORMS.replace('id,level,weight,character,field', 'id,level,weight,character,field,remark').replace(',x^2 - x - 1', ',x^2 - x - 1,').replace('lev11_wt2_o1,11,2,,', 'lev11_wt2_o1,11,2,,,')
 project('fail-on-warning-fails-on-a-warning', 'failOnWarning=true fails the build on a warning (here: an unknown column).',
@@ -449,7 +449,7 @@ def run = { List args ->
 def (code, out, err) = run(["data"])
 assert code == 1 : "exit " + code + "\\n" + out + err
 assert out.readLines() == [
-    "[ERROR] eigengate: 1 error, 0 warnings, 0 notes in 1 dataset (2 forms, 24 coefficient rows, 13 checks)",
+    "[ERROR] eigengate: 1 error, 0 warnings, 0 notes in 1 dataset (2 forms, 24 coefficient rows, 22 checks)",
     "[ERROR] data/coefficients.csv:9: error [hecke-relations] form=lev11_wt2_o1 n=6: expected 2, found -2; a_mn = a_m a_n for coprime m=2, n=3, a_2=-2, a_3=-1 (Diamond–Shurman Prop. 5.8.5)",
     "[ERROR] eigengate: report in target/eigengate/report.html"] : out
 assert err == "" : "no progress line when stderr is not a terminal: " + err

@@ -16,7 +16,7 @@ def run = { List args ->
 def (code, out, err) = run(["data"])
 assert code == 1 : "exit " + code + "\n" + out + err
 assert out.readLines() == [
-    "[ERROR] eigengate: 1 error, 0 warnings, 0 notes in 1 dataset (2 forms, 24 coefficient rows, 13 checks)",
+    "[ERROR] eigengate: 1 error, 0 warnings, 0 notes in 1 dataset (2 forms, 24 coefficient rows, 22 checks)",
     "[ERROR] data/coefficients.csv:9: error [hecke-relations] form=lev11_wt2_o1 n=6: expected 2, found -2; a_mn = a_m a_n for coprime m=2, n=3, a_2=-2, a_3=-1 (Diamond–Shurman Prop. 5.8.5)",
     "[ERROR] eigengate: report in target/eigengate/report.html"] : out
 assert err == "" : "no progress line when stderr is not a terminal: " + err
