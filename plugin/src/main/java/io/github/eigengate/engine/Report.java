@@ -9,12 +9,20 @@ import java.util.Map;
 import java.util.Set;
 
 /**
- * The outcome of a run: findings (the first {@code maxFindings} in full), counts by severity including the ones
- * not kept, the units each check examined, and what was read.
+ * The outcome of a run: findings (the first {@code maxFindings} in report order in full), counts by severity
+ * including the ones not kept, the units each check examined, and what was read. {@code notices} are messages about
+ * the run itself, not the data (e.g. a damaged cache entry that was rebuilt): a build log shows them as warnings;
+ * they are not part of the report files.
  */
 public record Report(List<String> datasets, List<String> checks, List<Finding> findings,
                      Map<Severity, Integer> counts, int notKept, Map<String, Set<Subject>> examined,
-                     long rows, int forms, List<Certificate> certificates) {
+                     long rows, int forms, List<Certificate> certificates, List<String> notices) {
+
+    public Report(List<String> datasets, List<String> checks, List<Finding> findings,
+                  Map<Severity, Integer> counts, int notKept, Map<String, Set<Subject>> examined,
+                  long rows, int forms, List<Certificate> certificates) {
+        this(datasets, checks, findings, counts, notKept, examined, rows, forms, certificates, List.of());
+    }
 
     public int errors() {
         return counts.getOrDefault(Severity.ERROR, 0);
