@@ -3,8 +3,9 @@ package io.github.eigengate.arith;
 import java.util.function.Supplier;
 
 /**
- * A deterministic work meter. Expensive operations {@link #charge} units of work (roughly, elementary operations
- * on coefficients: a product of polynomials of lengths m and n costs m·n); a task run by {@link #unit} may spend at
+ * A deterministic work meter. Expensive operations {@link #charge} units of work: a unit is about one operation on
+ * machine words (a nanosecond or so), an operation on big integers or rationals counts {@link #BIG}, so a product
+ * of polynomials over Q of lengths m and n costs 20·m·n; a task run by {@link #unit} may spend at
  * most the thread's configured budget and is stopped with {@link Exceeded} beyond it. Counting work instead of
  * measuring time keeps every verdict, and every report, independent of the machine and of its load.
  */
@@ -33,6 +34,9 @@ public final class Work {
             this.left = budget;
         }
     }
+
+    /** The charge of one operation on big integers or rationals, relative to one on machine words (about 1 ns). */
+    public static final long BIG = 20;
 
     private static final ThreadLocal<Meter> METER = new ThreadLocal<>();
     private static final ThreadLocal<Long> UNIT_BUDGET = new ThreadLocal<>();

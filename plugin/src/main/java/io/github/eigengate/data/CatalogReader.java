@@ -27,6 +27,13 @@ public final class CatalogReader {
     /** Beyond this, exact factorisation and characteristic polynomials stop being affordable in a build. */
     static final int MAX_FIELD_DEGREE = 1000;
 
+    /**
+     * Work (see {@link Work}) allowed to decide that one field polynomial is irreducible: a few seconds. Real Hecke
+     * fields of degree up to a few hundred take a small fraction of it; Zassenhaus recombination is exponential for
+     * polynomials with many modular factors (Swinnerton-Dyer polynomials), which are then reported, not waited for.
+     */
+    static final long FIELD_BUDGET = 1_000_000_000L;
+
     private CatalogReader() {
     }
 
@@ -199,12 +206,14 @@ public final class CatalogReader {
         }
         String reducible;
         try {
-            reducible = Work.unit(() -> ZFactorization.isIrreducible(f) ? null
+            long budget = Work.unitBudget() < 0 ? FIELD_BUDGET : Math.min(FIELD_BUDGET, Work.unitBudget());
+            reducible = Work.unit(budget, () -> ZFactorization.isIrreducible(f) ? null
                     : ZFactorization.factor(f).stream().map(g -> "(" + g + ")").reduce((a, b) -> a + "*" + b)
                             .orElse(""));
         } catch (Work.Exceeded e) {
             return new QPolyCache(null, expected, "its irreducibility over Q was not decided within the work budget "
-                    + "of " + e.budget() + " units (parameter workBudget); the form is not checked");
+                    + "of " + e.budget() + " units (a field of this degree and shape is beyond what the gate factors "
+                    + "in a build; see docs/limits.md); the form is not checked");
         }
         if (reducible != null) {
             return new QPolyCache(null, expected, "the field polynomial is reducible over Q: it factors as "

@@ -23,8 +23,8 @@ public record Settings(int maxFindings, Set<String> skip, boolean uncertifiedIsW
 
     public static final int DEFAULT_MAX_FINDINGS = 1000;
 
-    /** Generous: some minutes of exact arithmetic; a real form of the test datasets costs far less. */
-    public static final long DEFAULT_WORK_BUDGET = 20_000_000_000L;
+    /** Generous: some tens of seconds of exact arithmetic; a real form of the test datasets costs far less. */
+    public static final long DEFAULT_WORK_BUDGET = 10_000_000_000L;
 
     public Settings {
         if (maxFindings < 1) {
