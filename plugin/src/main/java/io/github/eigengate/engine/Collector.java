@@ -98,8 +98,21 @@ final class Collector implements FindingSink, Problems {
         return i < 0 ? Integer.MAX_VALUE : i;
     }
 
+    /** Longest expected or found text a finding keeps; a hostile cell must not make the report huge. */
+    static final int MAX_SHOWN = 1000;
+
+    /** Cuts a text longer than MAX_SHOWN (plus room for the note, so that a cut text is never cut again). */
+    private static String shown(String s) {
+        return s.length() <= MAX_SHOWN + 64 ? s : s.substring(0, MAX_SHOWN) + "… (" + s.length() + " characters)";
+    }
+
     @Override
-    public void report(Finding finding) {
+    public void report(Finding original) {
+        Finding finding = original.expected().length() <= MAX_SHOWN + 64
+                && original.found().length() <= MAX_SHOWN + 64 && original.reason().length() <= 4 * MAX_SHOWN ? original
+                : new Finding(original.check(), original.severity(), original.location(), original.subject(),
+                        shown(original.expected()), shown(original.found()), original.reason().length() <= 4 * MAX_SHOWN
+                                ? original.reason() : original.reason().substring(0, 4 * MAX_SHOWN) + "…");
         counts.merge(finding.severity(), 1, Integer::sum);
         examined(finding.check(), unitOf(finding.subject()));
         kept.add(new Kept(finding, group, seq++));
