@@ -12,6 +12,7 @@ import io.github.eigengate.data.CoefficientReader;
 import io.github.eigengate.data.Coefficients;
 import io.github.eigengate.data.Form;
 import io.github.eigengate.data.FormData;
+import io.github.eigengate.data.Problems;
 import io.github.eigengate.data.SourceLocation;
 import java.nio.file.Path;
 import java.util.ArrayDeque;
@@ -126,8 +127,11 @@ public final class Gate {
         return new ResultCache.DatasetResult(out.snapshot(), rows, catalog.forms().size());
     }
 
-    /** What one form produced: the per-form checks' collector (computed on the pool), then the other passes'. */
-    private record Slot(Future<Collector.Snapshot> perForm, Collector.Snapshot others) {
+    /**
+     * What one form produced, merged in this order: what the reader reported since the previous form, the per-form
+     * checks' findings (computed on the pool), then the other passes'.
+     */
+    private record Slot(Collector.Snapshot read, Future<Collector.Snapshot> perForm, Collector.Snapshot others) {
     }
 
     /**
@@ -158,7 +162,21 @@ public final class Gate {
             Set<String> seen = new HashSet<>();
             long[] rows = {0};
             Deque<Slot> inFlight = new ArrayDeque<>();
+            Collector[] reading = {local.fresh()};
+            Problems readerProblems = new Problems() {
+                @Override
+                public void error(SourceLocation at, String subject, String expected, String found, String reason) {
+                    reading[0].error(at, subject, expected, found, reason);
+                }
+
+                @Override
+                public void warning(SourceLocation at, String subject, String expected, String found, String reason) {
+                    reading[0].warning(at, subject, expected, found, reason);
+                }
+            };
             java.util.function.Consumer<FormData<?>> each = data -> {
+                Collector.Snapshot read = reading[0].snapshot();
+                reading[0] = local.fresh();
                 rows[0] += data.coefficients().size();
                 Callable<Collector.Snapshot> task = () -> cache.form(data,
                         () -> checkForm(data, formChecks, formPasses, local.fresh()));
@@ -177,10 +195,10 @@ public final class Gate {
                                 Subject.form(data.form().id()), e);
                     }
                 }
-                inFlight.addLast(new Slot(perForm, others.snapshot()));
+                inFlight.addLast(new Slot(read, perForm, others.snapshot()));
                 drain(inFlight, local, window);
             };
-            Set<String> scattered = CoefficientReader.stream(catalog, holdBack, local, data -> {
+            Set<String> scattered = CoefficientReader.stream(catalog, holdBack, readerProblems, data -> {
                 seen.add(data.form().id());
                 each.accept(data);
             });
@@ -197,6 +215,7 @@ public final class Gate {
                 }
             }
             drain(inFlight, local, 0);
+            local.absorb(reading[0], 0);
             finish(catalog, crossChecks, crossPasses, broken, local, pool);
             outer.absorb(local);
             return rows[0];
@@ -216,6 +235,7 @@ public final class Gate {
     private static void drain(Deque<Slot> inFlight, Collector into, int window) {
         while (!inFlight.isEmpty() && (inFlight.size() > window || inFlight.peekFirst().perForm.isDone())) {
             Slot s = inFlight.removeFirst();
+            into.absorb(s.read, 0);
             into.absorb(get(s.perForm), 0);
             into.absorb(s.others, 0);
         }
