@@ -206,8 +206,7 @@ public final class CatalogReader {
         }
         String reducible;
         try {
-            long budget = Work.unitBudget() < 0 ? FIELD_BUDGET : Math.min(FIELD_BUDGET, Work.unitBudget());
-            reducible = Work.unit(budget, () -> ZFactorization.isIrreducible(f) ? null
+            reducible = Work.unit(FIELD_BUDGET, () -> ZFactorization.isIrreducible(f) ? null
                     : ZFactorization.factor(f).stream().map(g -> "(" + g + ")").reduce((a, b) -> a + "*" + b)
                             .orElse(""));
         } catch (Work.Exceeded e) {

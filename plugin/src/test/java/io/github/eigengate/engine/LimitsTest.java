@@ -76,4 +76,24 @@ class LimitsTest {
                 + "characters); the expression cannot be read at character 1000001: expected an expression of at most "
                 + "1000000 characters", lines.get(0));
     }
+
+    /**
+     * The degree-20 orbit of S_2^new(Γ0(389)) (datasets/bigfields, PARI/GP) under a budget far too small for its
+     * Hecke relations: the form is not decided, an error (a warning when configured), the same at 1 and 2 threads.
+     */
+    @Test
+    void aFormBeyondTheBudgetIsNotDecidedNeverPassed() {
+        List<Gate.Dataset> sets = List.of(new Gate.Dataset(Fixture.dataset("bigfields"), "bigfields"));
+        Settings tight = Settings.defaults().withWorkBudget(100_000, false);
+        Report r = new Gate(tight).run(sets);
+        String line = "bigfields/forms.csv:15: error [hecke-relations] form=lev389_wt2_o5: expected a verdict within "
+                + "the budget, found work beyond 100000 units; not decided within the work budget of 100000 units "
+                + "(parameter workBudget): the check was stopped for this form, which is therefore not passed";
+        assertTrue(Datasets.lines(r).contains(line), String.join("\n", Datasets.lines(r)));
+        assertTrue(r.failed());
+        assertEquals(Datasets.lines(r), Datasets.lines(new Gate(tight.withThreads(2)).run(sets)));
+        Report warned = new Gate(Settings.defaults().withWorkBudget(100_000, true)).run(sets);
+        assertTrue(Datasets.lines(warned).contains(line.replace(": error [", ": warning [")));
+        assertTrue(Datasets.errors(warned).stream().noneMatch(l -> l.contains("work budget")));
+    }
 }
