@@ -101,14 +101,18 @@ public final class RobustnessBench {
 
     private static void threads(Path dir, int forms) throws IOException {
         level11(dir, forms);
-        for (int round = 0; round < 2; round++) {
-            for (int t : new int[] {1, 2}) {
+        long[] best = {Long.MAX_VALUE, Long.MAX_VALUE};
+        for (int round = 0; round < 6; round++) { // interleaved, best of 5 after a warm-up round
+            for (int t = 1; t <= 2; t++) {
                 long ns = time(Settings.defaults().withThreads(t), dir);
-                if (round == 1) {
-                    System.out.printf("%d thread%s: %d ms, %,.0f rows/s%n", t, t == 1 ? "" : "s", ns / 1_000_000,
-                            forms * 1000L * 1e9 / ns);
+                if (round > 0) {
+                    best[t - 1] = Math.min(best[t - 1], ns);
                 }
             }
+        }
+        for (int t = 1; t <= 2; t++) {
+            System.out.printf("%d thread%s: %d ms, %,.0f rows/s%n", t, t == 1 ? "" : "s", best[t - 1] / 1_000_000,
+                    forms * 1000L * 1e9 / best[t - 1]);
         }
     }
 
