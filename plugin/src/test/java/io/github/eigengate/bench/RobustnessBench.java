@@ -19,7 +19,7 @@ import java.util.Set;
  * PARI/GP 2.15.2, fixtures-gp/), and of the level-11 newform's a_1..a_1000 (reference/level11.csv, OEIS A006571).
  *
  * <pre>
- *   RobustnessBench cache FORMS     degree-20 table of FORMS × 100 rows: cold run, then an unchanged re-run
+ *   RobustnessBench cache FORMS [quick]  degree-20 table of FORMS × 100 rows: cold run, then an unchanged re-run
  *   RobustnessBench threads FORMS   level-11 table of FORMS × 1000 rows at 1 and 2 threads
  *   RobustnessBench memory FORMS    level-11 table of FORMS × 1000 rows, one run (give -Xmx256m)
  * </pre>
@@ -35,7 +35,7 @@ public final class RobustnessBench {
         Path dir = Files.createTempDirectory("eigengate-robustness-bench");
         try {
             switch (mode) {
-                case "cache" -> cache(dir, forms);
+                case "cache" -> cache(dir, forms, args.length > 2 && args[2].equals("quick"));
                 case "threads" -> threads(dir, forms);
                 case "memory" -> memory(dir, forms);
                 default -> throw new IllegalArgumentException("mode: cache, threads or memory");
@@ -49,7 +49,8 @@ public final class RobustnessBench {
         }
     }
 
-    private static void cache(Path dir, int forms) throws IOException {
+    /** With {@code quick} (for big tables): no warm-up and no run without cache; cold is the run writing it. */
+    private static void cache(Path dir, int forms, boolean quick) throws IOException {
         Path data = Files.createDirectories(dir.resolve("data"));
         String poly = null;
         for (String l : Files.readAllLines(Fixture.dataset("bigfields").resolve("forms.csv"))) {
@@ -80,9 +81,12 @@ public final class RobustnessBench {
                 Files.size(data.resolve("coefficients.csv")) / 1e6);
         Path cache = dir.resolve("cache");
         Settings s = new Settings(1000, Set.of(), false).withCache(cache);
-        time(new Settings(1000, Set.of(), false), data); // warm-up of the JVM, not counted
-        long none = time(new Settings(1000, Set.of(), false), data);
-        long cold = time(s, data);
+        if (!quick) {
+            time(new Settings(1000, Set.of(), false), data); // warm-up of the JVM, not counted
+        }
+        long cold = quick ? time(s, data) : 0;
+        long none = quick ? cold : time(new Settings(1000, Set.of(), false), data);
+        cold = quick ? cold : time(s, data);
         long warm = Long.MAX_VALUE;
         for (int i = 0; i < 3; i++) {
             warm = Math.min(warm, time(s, data));
