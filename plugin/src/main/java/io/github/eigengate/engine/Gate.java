@@ -49,6 +49,9 @@ public final class Gate {
     static final String OVER_BUDGET = "not decided within the work budget of %d units (parameter workBudget): the "
             + "check was stopped for this %s, which is therefore not passed";
 
+    /** The start of the reason of a finding about a defect of Eigengate. */
+    static final String INTERNAL = "internal error of the check";
+
     private final Settings settings;
     private final List<Check> checks;
     private final List<String> ids;
@@ -101,7 +104,9 @@ public final class Gate {
                 ResultCache.DatasetResult done = cache.dataset(key);
                 if (done == null) {
                     done = checkDataset(d, pool, cache);
-                    cache.putDataset(key, done);
+                    if (done.collected().findings().stream().noneMatch(f -> f.reason().startsWith(INTERNAL))) {
+                        cache.putDataset(key, done); // a defect is reported afresh on every run, never cached
+                    }
                 }
                 collector.absorb(done.collected(), i);
                 rows += done.rows();
@@ -119,12 +124,19 @@ public final class Gate {
 
     private ResultCache.DatasetResult checkDataset(Dataset d, ExecutorService pool, ResultCache cache) {
         Collector out = new Collector(settings.maxFindings(), ids);
-        Catalog catalog = CatalogReader.read(d.directory(), d.display(), settings.root(), out);
-        if (catalog == null) {
-            return new ResultCache.DatasetResult(out.snapshot(), 0, 0);
+        try {
+            Catalog catalog = CatalogReader.read(d.directory(), d.display(), settings.root(), out);
+            if (catalog == null) {
+                return new ResultCache.DatasetResult(out.snapshot(), 0, 0);
+            }
+            long rows = runChecks(catalog, out, pool, cache);
+            return new ResultCache.DatasetResult(out.snapshot(), rows, catalog.forms().size());
+        } catch (RuntimeException | StackOverflowError e) { // a defect of the reader: an error, never a pass
+            Collector failed = new Collector(settings.maxFindings(), ids);
+            internal(failed, Problems.CHECK_ID, SourceLocation.file(d.display()),
+                    new Subject("dataset", d.display(), ""), e);
+            return new ResultCache.DatasetResult(failed.snapshot(), 0, 0);
         }
-        long rows = runChecks(catalog, out, pool, cache);
-        return new ResultCache.DatasetResult(out.snapshot(), rows, catalog.forms().size());
     }
 
     /**
@@ -333,7 +345,7 @@ public final class Gate {
     /** A check that throws is a defect of Eigengate, never a pass: it becomes an error naming the exception. */
     private static void internal(Collector out, String check, SourceLocation at, Subject subject, Throwable e) {
         out.report(new io.github.eigengate.check.Finding(check, Severity.ERROR, at, subject, "a verdict",
-                e.getClass().getSimpleName(), "internal error of the check (" + e.getClass().getName()
+                e.getClass().getSimpleName(), INTERNAL + " (" + e.getClass().getName()
                         + (e.getMessage() == null ? "" : ": " + e.getMessage())
                         + "): nothing is decided for this unit; please report it"));
     }
