@@ -131,7 +131,13 @@ project('empty-file', 'An empty forms.csv.',
         ["[ERROR] data/forms.csv: error [table-format] table=data/forms.csv: expected a header row, found an empty file; every table starts with a header row naming its columns"])
 project('not-utf8', 'A coefficients file that is not UTF-8.',
         {'data/forms.csv': FORMS, 'data/coefficients.csv': b'form,n,value\nlev11_wt2_o1,1,1\nlev11_wt2_o1,2,\xff\xfe\n'},
-        ["[ERROR] data/coefficients.csv: error [table-format] table=data/coefficients.csv: expected UTF-8 text, found bytes that are not UTF-8; the file is not valid UTF-8"])
+        ["[ERROR] data/coefficients.csv:3: error [table-format] table=data/coefficients.csv: expected UTF-8 text, found bytes that are not UTF-8; line 3 is not valid UTF-8; it is not read"])
+b6 = list(L11); b6[5] = '-2'
+project('threads-and-cache', 'Two threads and a cache directory of its own: the planted error is reported as with one thread, and the cache is written.',
+        {'data/forms.csv': FORMS, 'data/coefficients.csv': coeffs(l11=b6)},
+        ['[ERROR] data/coefficients.csv:9: error [hecke-relations] form=lev11_wt2_o1 n=6: expected 2, found -2; a_mn = a_m a_n for coprime m=2, n=3, a_2=-2, a_3=-1 (Diamond–Shurman Prop. 5.8.5)'],
+        config='\n        <configuration><threads>2</threads><cacheDirectory>${project.build.directory}/gate-cache</cacheDirectory></configuration>',
+        extra_verify='assert new File(basedir, "target/gate-cache").listFiles().length > 0 : "the cache was not written"\n')
 project('missing-dataset', 'A configured dataset directory that does not exist.',
         {'README.md': 'The configured dataset directory tables/ is missing on purpose.\n'},
         ["[ERROR] tables: error [table-format] dataset=tables: expected a dataset directory, found nothing; the dataset directory does not exist"],

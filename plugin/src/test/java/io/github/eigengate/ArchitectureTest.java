@@ -26,6 +26,7 @@ class ArchitectureTest {
             "arith", List.of("io.github.eigengate.", "org.apache."),
             "theory", List.of("io.github.eigengate.data", "io.github.eigengate.check", "io.github.eigengate.engine",
                     "io.github.eigengate.report", "io.github.eigengate.maven", "org.apache."),
+            "cache", List.of("io.github.eigengate.", "org.apache."),
             "data", List.of("io.github.eigengate.theory", "io.github.eigengate.check", "io.github.eigengate.engine",
                     "io.github.eigengate.report", "io.github.eigengate.maven", "org.apache.maven"),
             "check", List.of("io.github.eigengate.engine", "io.github.eigengate.report", "io.github.eigengate.maven",

@@ -249,6 +249,7 @@ public final class FpPoly implements Comparable<FpPoly> {
             return new FpPoly(p, NONE);
         }
         long[] r = new long[c.length + o.c.length - 1];
+        Work.charge((long) c.length * o.c.length);
         for (int i = 0; i < c.length; i++) {
             long a = c[i];
             if (a == 0) {
@@ -302,6 +303,7 @@ public final class FpPoly implements Comparable<FpPoly> {
         }
         long[] r = c.clone();
         long[] q = new long[degree() - dd + 1];
+        Work.charge((long) (degree() - dd + 1) * (dd + 1));
         long inv = invMod(d.leadingCoefficient(), p);
         for (int k = degree(); k >= dd; k--) {
             long t = mulMod(r[k], inv, p);

@@ -411,6 +411,7 @@ public final class NumberField extends ElementField<NumberField.Element> {
             other(o);
             int d = num.length;
             BigInteger[] p = ZPoly.multiply(num, o.num);
+            Work.charge(Work.BIG * d * d);
             if (p.length == 0) {
                 return field.zero;
             }
@@ -457,6 +458,7 @@ public final class NumberField extends ElementField<NumberField.Element> {
             if (d == 1) {
                 return field.fromRational(Rational.of(num[0], den).inverse());
             }
+            Work.charge(Work.BIG * d * d * d);
             // integer matrix N = L * M, column j = coordinates of (num as element) * x^j scaled
             Rational[] lower = new Rational[d];
             for (int j = 0; j < d; j++) {

@@ -19,8 +19,8 @@ import java.util.List;
  * Repeated powers are summed.
  */
 final class PolyParser {
-    /** Largest exponent accepted, to keep a typo from allocating huge arrays. */
-    static final int MAX_EXPONENT = 100_000;
+    /** Largest exponent accepted (see {@link Limits#MAX_EXPONENT}). */
+    static final int MAX_EXPONENT = Limits.MAX_EXPONENT;
 
     private final String text;
     private final char[] s;
@@ -47,6 +47,10 @@ final class PolyParser {
 
     /** @return coefficients low to high, trailing zeros removed (empty list for the zero polynomial) */
     static List<Rational> parse(String text) {
+        if (text.length() > Limits.MAX_EXPRESSION_LENGTH) {
+            throw new ExpressionSyntaxException(text, Limits.MAX_EXPRESSION_LENGTH,
+                    "an expression of at most " + Limits.MAX_EXPRESSION_LENGTH + " characters");
+        }
         return new PolyParser(text).run();
     }
 
@@ -144,6 +148,10 @@ final class PolyParser {
         int start = i;
         while (more() && Rational.isDigit(s[i])) {
             i++;
+        }
+        if (i - start > Limits.MAX_DIGITS) {
+            i = start;
+            throw error("a number of at most " + Limits.MAX_DIGITS + " digits");
         }
         return new BigInteger(new String(s, start, i - start));
     }

@@ -182,6 +182,7 @@ public final class QPoly {
             return ZERO;
         }
         Rational[] r = new Rational[c.length + o.c.length - 1];
+        Work.charge(Work.BIG * c.length * o.c.length);
         Arrays.fill(r, Rational.ZERO);
         for (int i = 0; i < c.length; i++) {
             if (c[i].signum() == 0) {
@@ -227,6 +228,7 @@ public final class QPoly {
         }
         Rational[] r = c.clone();
         Rational[] q = new Rational[degree() - dd + 1];
+        Work.charge(Work.BIG * (degree() - dd + 1) * (dd + 1));
         Rational inv = d.leadingCoefficient().inverse();
         for (int k = degree(); k >= dd; k--) {
             Rational t = r[k].multiply(inv);

@@ -99,6 +99,10 @@ public final class Rational implements Comparable<Rational> {
         if (i == start) {
             throw new ExpressionSyntaxException(text, i, start == 0 ? "a sign or a digit" : "a digit");
         }
+        if (i - start > Limits.MAX_DIGITS || n - i > Limits.MAX_DIGITS + 1) {
+            throw new ExpressionSyntaxException(text, i - start > Limits.MAX_DIGITS ? start : i + 1,
+                    "a number of at most " + Limits.MAX_DIGITS + " digits");
+        }
         BigInteger num = new BigInteger(text.substring(start, i));
         if (negative) {
             num = num.negate();

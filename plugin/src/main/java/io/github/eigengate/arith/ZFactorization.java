@@ -299,6 +299,7 @@ public final class ZFactorization {
         }
         BigInteger[] r = a.clone();
         BigInteger[] q = new BigInteger[a.length - dh];
+        Work.charge(Work.BIG * (a.length - dh) * (dh + 1) * (1 + m.bitLength() / 64));
         for (int k = a.length - 1; k >= dh; k--) {
             BigInteger t = r[k].mod(m);
             q[k - dh] = t;
@@ -333,6 +334,7 @@ public final class ZFactorization {
             }
             BigInteger b = ZPoly.lc(f);
             while (true) {
+                Work.charge(Work.BIG * (k + 1) * (1 + m.bitLength() / 64) * (1 + m.bitLength() / 64));
                 int deg = 0;
                 for (int j : idx) {
                     deg += ZPoly.degree(rest.get(j));

@@ -70,6 +70,15 @@ public final class Main implements Callable<Integer> {
     @Option(names = "--report-only", description = "exit 0 even when errors are found (for a first adoption)")
     private boolean reportOnly;
 
+    @Option(names = "--threads", paramLabel = "N",
+            description = "forms checked at the same time (default: the available processors); the report does "
+                    + "not depend on it")
+    private Integer threads;
+
+    @Option(names = "--cache", paramLabel = "DIR",
+            description = "keep results in DIR and re-check only what changed (default: no cache)")
+    private Path cache;
+
     @Option(names = {"-q", "--quiet"}, description = "no progress line on stderr")
     private boolean quiet;
 
@@ -173,7 +182,12 @@ public final class Main implements Callable<Integer> {
         if (maxFindings < 1) {
             throw new UsageException("--max-findings must be at least 1, was " + maxFindings);
         }
-        return new Settings(maxFindings, skip, u.equals("warning"));
+        int n = threads == null ? Settings.availableThreads() : threads;
+        if (n < 1) {
+            throw new UsageException("--threads must be at least 1, was " + n);
+        }
+        return new Settings(maxFindings, skip, u.equals("warning")).withThreads(n)
+                .withCache(cache == null ? null : workingDirectory.resolve(cache));
     }
 
     private Set<String> formats() {

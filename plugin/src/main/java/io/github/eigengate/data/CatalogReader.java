@@ -4,9 +4,11 @@ import io.github.eigengate.arith.DirichletCharacter;
 import io.github.eigengate.arith.ExpressionSyntaxException;
 import io.github.eigengate.arith.NumberField;
 import io.github.eigengate.arith.QPoly;
+import io.github.eigengate.arith.Work;
 import io.github.eigengate.arith.ZFactorization;
 import java.io.IOException;
 import java.nio.file.Files;
+import java.nio.file.LinkOption;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -27,6 +29,13 @@ public final class CatalogReader {
     /** Beyond this, exact factorisation and characteristic polynomials stop being affordable in a build. */
     static final int MAX_FIELD_DEGREE = 1000;
 
+    /**
+     * Work (see {@link Work}) allowed to decide that one field polynomial is irreducible: a few seconds. Real Hecke
+     * fields of degree up to a few hundred take a small fraction of it; Zassenhaus recombination is exponential for
+     * polynomials with many modular factors (Swinnerton-Dyer polynomials), which are then reported, not waited for.
+     */
+    static final long FIELD_BUDGET = 1_000_000_000L;
+
     private CatalogReader() {
     }
 
@@ -36,31 +45,93 @@ public final class CatalogReader {
      * @return the catalog, or {@code null} (after reporting) when the directory or {@code forms.csv} is missing
      */
     public static Catalog read(Path directory, String display, Problems problems) {
+        return read(directory, display, null, problems);
+    }
+
+    /**
+     * As {@link #read(Path, String, Problems)}, with every path confined (after symbolic links) to {@code root}, or,
+     * when it is {@code null}, every file to the dataset's own directory: a table that is a link to elsewhere, a
+     * dangling link, a FIFO or a directory named like a table is reported, never followed or skipped in silence.
+     */
+    public static Catalog read(Path directory, String display, Path root, Problems problems) {
         if (!Files.isDirectory(directory)) {
             problems.error(SourceLocation.file(display), "dataset=" + display, "a dataset directory",
                     Files.exists(directory) ? "a file" : "nothing", "the dataset directory does not exist");
             return null;
         }
+        Path bound;
+        try {
+            Path real = directory.toRealPath();
+            Path rootReal = root == null ? null : root.toRealPath();
+            if (rootReal != null && !real.startsWith(rootReal)) {
+                problems.error(SourceLocation.file(display), "dataset=" + display,
+                        "a directory inside " + rootReal, real.toString(),
+                        "the dataset directory resolves (through symbolic links) outside the project root; "
+                                + "it is not read");
+                return null;
+            }
+            bound = rootReal == null ? real : rootReal;
+        } catch (IOException e) {
+            problems.error(SourceLocation.file(display), "dataset=" + display, "a readable directory",
+                    "an I/O error", "the dataset directory cannot be resolved: " + e.getMessage());
+            return null;
+        }
         Path formsFile = directory.resolve(Tables.FORMS);
-        if (!Files.isRegularFile(formsFile)) {
+        if (!Files.exists(formsFile, LinkOption.NOFOLLOW_LINKS)) {
             problems.error(SourceLocation.file(name(display, Tables.FORMS)), "dataset=" + display,
                     "a file " + Tables.FORMS, "none", "every dataset needs " + Tables.FORMS);
+            return null;
+        }
+        if (!admitted(formsFile, name(display, Tables.FORMS), bound, problems)) {
             return null;
         }
         Set<String> rejected = new HashSet<>();
         Map<String, AtkinLehnerSigns> signs = new HashMap<>();
         Map<String, Form> forms = readForms(formsFile, name(display, Tables.FORMS), problems, rejected, signs);
-        List<SpaceRow> spaces = readSpaces(directory, display, problems);
-        List<Path> shards = coefficientFiles(directory, display, problems);
+        List<SpaceRow> spaces = readSpaces(directory, display, bound, problems);
+        List<Path> shards = coefficientFiles(directory, display, bound, problems);
         List<TableRow> congruences = readRows(directory, display, Tables.CONGRUENCES, Tables.CONGRUENCES_REQUIRED,
-                Tables.CONGRUENCES_OPTIONAL, problems);
+                Tables.CONGRUENCES_OPTIONAL, bound, problems);
         List<TableRow> reducible = readRows(directory, display, Tables.REDUCIBLE, Tables.REDUCIBLE_REQUIRED,
-                Tables.REDUCIBLE_OPTIONAL, problems);
+                Tables.REDUCIBLE_OPTIONAL, bound, problems);
         List<TableRow> weights = readRows(directory, display, Tables.WEIGHTS, Tables.WEIGHTS_REQUIRED,
-                Tables.WEIGHTS_OPTIONAL, problems);
-        List<CurveRow> curves = CurveReader.read(directory, display, forms, rejected, problems);
+                Tables.WEIGHTS_OPTIONAL, bound, problems);
+        List<CurveRow> curves = CurveReader.read(directory, display, bound, forms, rejected, problems);
         return new Catalog(directory, display, forms, Set.copyOf(rejected), spaces, shards, congruences, reducible,
                 weights, curves, Map.copyOf(signs));
+    }
+
+    /**
+     * Whether a table that is present may be read: a regular file (links followed) that resolves inside
+     * {@code bound}. Anything else is reported as an error at the file.
+     */
+    static boolean admitted(Path file, String shown, Path bound, Problems problems) {
+        String subject = "table=" + shown;
+        if (Files.isSymbolicLink(file) && !Files.exists(file)) {
+            problems.error(SourceLocation.file(shown), subject, "a readable file", "a dangling symbolic link",
+                    "the table is a symbolic link to nothing; it is not read");
+            return false;
+        }
+        if (!Files.isRegularFile(file)) {
+            problems.error(SourceLocation.file(shown), subject, "a regular file",
+                    Files.isDirectory(file) ? "a directory" : "a special file (FIFO, device or socket)",
+                    "the table is not a regular file; it is not read");
+            return false;
+        }
+        try {
+            Path real = file.toRealPath();
+            if (!real.startsWith(bound)) {
+                problems.error(SourceLocation.file(shown), subject, "a file inside " + bound, real.toString(),
+                        "the table resolves (through symbolic links) outside the "
+                                + "project root; it is not read");
+                return false;
+            }
+        } catch (IOException e) {
+            problems.error(SourceLocation.file(shown), subject, "a readable file", "an I/O error",
+                    "the table cannot be resolved: " + e.getMessage());
+            return false;
+        }
+        return true;
     }
 
     static String name(String display, String file) {
@@ -162,21 +233,30 @@ public final class CatalogReader {
         if (!f.hasIntegerCoefficients()) {
             return new QPolyCache(null, expected, "the field polynomial has non-integral coefficients");
         }
-        if (!ZFactorization.isIrreducible(f)) {
-            List<QPoly> factors = ZFactorization.factor(f);
+        String reducible;
+        try {
+            reducible = Work.unit(FIELD_BUDGET, () -> ZFactorization.isIrreducible(f) ? null
+                    : ZFactorization.factor(f).stream().map(g -> "(" + g + ")").reduce((a, b) -> a + "*" + b)
+                            .orElse(""));
+        } catch (Work.Exceeded e) {
+            return new QPolyCache(null, expected, "its irreducibility over Q was not decided within the work budget "
+                    + "of " + e.budget() + " units (a field of this degree and shape is beyond what the gate factors "
+                    + "in a build; see docs/limits.md); the form is not checked");
+        }
+        if (reducible != null) {
             return new QPolyCache(null, expected, "the field polynomial is reducible over Q: it factors as "
-                    + factors.stream().map(g -> "(" + g + ")").reduce((a, b) -> a + "*" + b).orElse(""));
+                    + reducible);
         }
         return new QPolyCache(NumberField.of(f), expected, null);
     }
 
-    private static List<SpaceRow> readSpaces(Path directory, String display, Problems problems) {
+    private static List<SpaceRow> readSpaces(Path directory, String display, Path bound, Problems problems) {
         Path file = directory.resolve(Tables.SPACES);
         List<SpaceRow> spaces = new ArrayList<>();
-        if (!Files.isRegularFile(file)) {
+        String shown = name(display, Tables.SPACES);
+        if (!Files.exists(file, LinkOption.NOFOLLOW_LINKS) || !admitted(file, shown, bound, problems)) {
             return spaces;
         }
-        String shown = name(display, Tables.SPACES);
         Map<SpaceKey, Integer> seen = new HashMap<>();
         CsvTable.of(file, shown, Tables.SPACES_REQUIRED, Tables.SPACES_OPTIONAL).read(problems, row -> {
             String subject = "space=line " + row.line();
@@ -224,17 +304,19 @@ public final class CatalogReader {
         return spaces;
     }
 
-    private static List<Path> coefficientFiles(Path directory, String display, Problems problems) {
+    private static List<Path> coefficientFiles(Path directory, String display, Path bound, Problems problems) {
         List<Path> files = new ArrayList<>();
         Path main = directory.resolve(Tables.COEFFICIENTS);
-        if (Files.isRegularFile(main)) {
+        if (Files.exists(main, LinkOption.NOFOLLOW_LINKS)
+                && admitted(main, name(display, Tables.COEFFICIENTS), bound, problems)) {
             files.add(main);
         }
         try (Stream<Path> list = Files.list(directory)) {
             list.filter(p -> {
                 String n = p.getFileName().toString();
-                return n.startsWith(Tables.COEFFICIENT_SHARD_PREFIX) && n.endsWith(".csv") && Files.isRegularFile(p);
-            }).sorted().forEach(files::add);
+                return n.startsWith(Tables.COEFFICIENT_SHARD_PREFIX) && n.endsWith(".csv");
+            }).sorted().filter(p -> admitted(p, name(display, p.getFileName().toString()), bound, problems))
+                    .forEach(files::add);
         } catch (IOException e) {
             problems.error(SourceLocation.file(display), "dataset=" + display, "a readable directory",
                     "an I/O error", "the dataset directory cannot be listed: " + e.getMessage());
@@ -243,10 +325,11 @@ public final class CatalogReader {
     }
 
     private static List<TableRow> readRows(Path directory, String display, String fileName, List<String> required,
-                                           List<String> optional, Problems problems) {
+                                           List<String> optional, Path bound, Problems problems) {
         Path file = directory.resolve(fileName);
         List<TableRow> rows = new ArrayList<>();
-        if (!Files.isRegularFile(file)) {
+        if (!Files.exists(file, LinkOption.NOFOLLOW_LINKS)
+                || !admitted(file, name(display, fileName), bound, problems)) {
             return rows;
         }
         CsvTable table = CsvTable.of(file, name(display, fileName), required, optional);

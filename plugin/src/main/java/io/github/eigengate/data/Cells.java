@@ -35,6 +35,11 @@ final class Cells {
                 return v;
             }
         }
+        if (significantDigits(text) > 19) { // beyond every long: out of range, decided without BigInteger
+            problems.error(row.at(column), subject, "an integer in " + range(min, max), text,
+                    "'" + column + "' is out of range");
+            return null;
+        }
         BigInteger v = new BigInteger(text);
         if (v.compareTo(BigInteger.valueOf(min)) < 0 || v.compareTo(BigInteger.valueOf(max)) > 0) {
             problems.error(row.at(column), subject, "an integer in " + range(min, max), text,
@@ -131,6 +136,15 @@ final class Cells {
             v = v * 10 + (c - '0');
         }
         return negative ? -v : v;
+    }
+
+    /** Digits after the sign and leading zeros of a decimal integer. */
+    static int significantDigits(String s) {
+        int i = s.startsWith("-") || s.startsWith("+") ? 1 : 0;
+        while (i < s.length() - 1 && s.charAt(i) == '0') {
+            i++;
+        }
+        return s.length() - i;
     }
 
     static String range(long min, long max) {

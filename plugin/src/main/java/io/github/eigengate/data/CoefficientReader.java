@@ -238,6 +238,9 @@ public final class CoefficientReader {
         if (!Cells.isInteger(s)) {
             return "the form has rational coefficients (no field), so a_n must be an integer";
         }
+        if (Cells.significantDigits(s) > io.github.eigengate.arith.Limits.MAX_DIGITS) {
+            return "an integer of at most " + io.github.eigengate.arith.Limits.MAX_DIGITS + " digits is accepted";
+        }
         return Rational.of(new BigInteger(s)); // small ones were read above, without allocation
     }
 

@@ -3,6 +3,7 @@ package io.github.eigengate.data;
 import io.github.eigengate.arith.WeierstrassModel;
 import java.math.BigInteger;
 import java.nio.file.Files;
+import java.nio.file.LinkOption;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -22,15 +23,18 @@ public final class CurveReader {
     private CurveReader() {
     }
 
-    /** The rows of {@code curves.csv} in file order; empty when the dataset has no such file. */
-    public static List<CurveRow> read(Path directory, String display, Map<String, Form> forms, Set<String> rejected,
-                                      Problems problems) {
+    /**
+     * The rows of {@code curves.csv} in file order; empty when the dataset has no such file. The file must be a
+     * regular file inside {@code bound}, like every table ({@link CatalogReader#admitted}).
+     */
+    public static List<CurveRow> read(Path directory, String display, Path bound, Map<String, Form> forms,
+                                      Set<String> rejected, Problems problems) {
         Path file = directory.resolve(Tables.CURVES);
         List<CurveRow> rows = new ArrayList<>();
-        if (!Files.isRegularFile(file)) {
+        String shown = CatalogReader.name(display, Tables.CURVES);
+        if (!Files.exists(file, LinkOption.NOFOLLOW_LINKS) || !CatalogReader.admitted(file, shown, bound, problems)) {
             return rows;
         }
-        String shown = CatalogReader.name(display, Tables.CURVES);
         CsvTable.of(file, shown, Tables.CURVES_REQUIRED, Tables.CURVES_OPTIONAL).read(problems, row -> {
             String id = row.get("form");
             String subject = "form=" + (id.isEmpty() ? "?" : id);

@@ -10,22 +10,24 @@ import java.util.Map;
 import java.util.Set;
 
 /**
- * The outcome of a run: findings (the first {@code maxFindings} in full), counts by severity including the ones
- * not kept, the units each check examined, and what was read.
+ * The outcome of a run: findings (the first {@code maxFindings} in report order in full), counts by severity
+ * including the ones not kept, the units each check examined, and what was read. {@code notices} are messages about
+ * the run itself, not the data (e.g. a damaged cache entry that was rebuilt): a build log shows them as warnings;
+ * they are not part of the report files.
  *
  * @param examinedIn dataset → check → the units it examined there (so reports can tell two datasets apart)
  * @param measures   quantities the checks computed about their units, for the reports to show
  */
 public record Report(List<String> datasets, List<String> checks, List<Finding> findings,
                      Map<Severity, Integer> counts, int notKept, Map<String, Set<Subject>> examined,
-                     long rows, int forms, List<Certificate> certificates,
+                     long rows, int forms, List<Certificate> certificates, List<String> notices,
                      Map<String, Map<String, Set<Subject>>> examinedIn, List<Measure> measures) {
 
-    /** A report whose examined units are not told apart by dataset, and without measures. */
-    public Report(List<String> datasets, List<String> checks, List<Finding> findings, Map<Severity, Integer> counts,
-                  int notKept, Map<String, Set<Subject>> examined, long rows, int forms,
-                  List<Certificate> certificates) {
-        this(datasets, checks, findings, counts, notKept, examined, rows, forms, certificates,
+    /** A report whose examined units are not told apart by dataset, without notices and measures. */
+    public Report(List<String> datasets, List<String> checks, List<Finding> findings,
+                  Map<Severity, Integer> counts, int notKept, Map<String, Set<Subject>> examined,
+                  long rows, int forms, List<Certificate> certificates) {
+        this(datasets, checks, findings, counts, notKept, examined, rows, forms, certificates, List.of(),
                 datasets.isEmpty() ? Map.of() : Map.of(datasets.get(0), examined), List.of());
     }
 

@@ -69,6 +69,39 @@ public final class CheckMojo extends AbstractMojo {
     @Parameter(defaultValue = "${project.basedir}", readonly = true, required = true)
     private File basedir;
 
+    /** Forms checked at the same time; the reports do not depend on it. Default: the available processors. */
+    @Parameter(property = "eigengate.threads")
+    private Integer threads;
+
+    /** Whether results are kept between runs (see docs/configuration.md, "Cache"). Default: true. */
+    @Parameter(property = "eigengate.cache", defaultValue = "true")
+    private boolean cache;
+
+    /**
+     * Where results are kept between runs; a CI job may keep it between builds. Default:
+     * {@code ${project.build.directory}/eigengate/cache}.
+     */
+    @Parameter(property = "eigengate.cacheDirectory", defaultValue = "${project.build.directory}/eigengate/cache")
+    private File cacheDirectory;
+
+    /**
+     * Units of work one check may spend on one form (docs/limits.md); a form beyond it is reported as not decided.
+     * Default: 10000000000 (some tens of seconds).
+     */
+    @Parameter(property = "eigengate.workBudget", defaultValue = "10000000000")
+    private long workBudget;
+
+    /** Severity of a form not decided within the work budget: {@code error} or {@code warning}. Default: error. */
+    @Parameter(property = "eigengate.overBudget", defaultValue = "error")
+    private String overBudget;
+
+    /**
+     * Directory every dataset, and every table in it, must resolve into after symbolic links. Default:
+     * {@code ${project.basedir}}.
+     */
+    @Parameter(property = "eigengate.root", defaultValue = "${project.basedir}")
+    private File root;
+
     @Override
     public void execute() throws MojoExecutionException, MojoFailureException {
         if (skip) {
@@ -131,7 +164,27 @@ public final class CheckMojo extends AbstractMojo {
         if (maxFindings < 1) {
             throw new MojoExecutionException("eigengate: 'maxFindings' must be at least 1, was " + maxFindings);
         }
-        return new Settings(maxFindings, skipIds, u.equals("warning"));
+        Settings base = new Settings(maxFindings, skipIds, u.equals("warning"));
+        return limits(base);
+    }
+
+    /** The parameters of issue 14: threads, cache, work budget and root. */
+    private Settings limits(Settings base) throws MojoExecutionException {
+        int n = threads == null ? Settings.availableThreads() : threads;
+        if (n < 1) {
+            throw new MojoExecutionException("eigengate: 'threads' must be at least 1, was " + n);
+        }
+        if (workBudget < 1) {
+            throw new MojoExecutionException("eigengate: 'workBudget' must be at least 1, was " + workBudget);
+        }
+        String o = overBudget == null ? "error" : overBudget.strip().toLowerCase(Locale.ROOT);
+        if (!o.equals("error") && !o.equals("warning")) {
+            throw new MojoExecutionException("eigengate: 'overBudget' must be error or warning, was '" + overBudget
+                    + "'");
+        }
+        return base.withThreads(n).withCache(cache && cacheDirectory != null ? cacheDirectory.toPath() : null)
+                .withWorkBudget(workBudget, o.equals("warning"))
+                .withRoot(root == null ? basedir.toPath() : root.toPath());
     }
 
     private void log(Report report) {

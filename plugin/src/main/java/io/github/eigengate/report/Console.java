@@ -7,8 +7,8 @@ import java.util.ArrayList;
 import java.util.List;
 
 /**
- * The console lines of a run, the same for the Maven goal and the command line: the count line, then one line per
- * listed finding, each with the level it is logged at.
+ * The console lines of a run, the same for the Maven goal and the command line: notices about the run, the count
+ * line, then one line per listed finding, each with the level it is logged at.
  */
 public final class Console {
 
@@ -27,8 +27,12 @@ public final class Console {
         }
     }
 
+    /** Notices about the run itself (e.g. a damaged cache entry rebuilt) as warnings, the count line, the findings. */
     public static List<Line> lines(Report report) {
         List<Line> out = new ArrayList<>();
+        for (String notice : report.notices()) {
+            out.add(new Line(Severity.WARNING, notice));
+        }
         out.add(new Line(report.failed() ? Severity.ERROR : Severity.NOTE, "eigengate: " + report.summary()));
         for (Finding f : report.findings()) {
             out.add(new Line(f.severity(), f.line()));

@@ -101,8 +101,13 @@ public final class JUnitXmlReport {
         return String.join("\n", ls);
     }
 
+    /** XML 1.0 §2.2 Char, for one UTF-16 unit outside a surrogate pair. */
+    static boolean allowed(char c) {
+        return c == '\t' || c == '\n' || c == '\r' || (c >= 0x20 && c <= 0xD7FF) || (c >= 0xE000 && c <= 0xFFFD);
+    }
+
     private static String attr(String s) {
-        return text(s).replace("\"", "&quot;").replace("\n", "&#10;");
+        return text(s).replace("\"", "&quot;").replace("\n", "&#10;").replace("\r", "&#13;").replace("\t", "&#9;");
     }
 
     private static String text(String s) {
@@ -114,10 +119,12 @@ public final class JUnitXmlReport {
                 case '<' -> b.append("&lt;");
                 case '>' -> b.append("&gt;");
                 default -> {
-                    if (c < 0x20 && c != '\n' && c != '\t' && c != '\r') {
-                        b.append('?');
-                    } else {
+                    if (Character.isHighSurrogate(c) && i + 1 < s.length() && Character.isLowSurrogate(s.charAt(i + 1))) {
+                        b.append(c).append(s.charAt(++i)); // a pair: a character beyond U+FFFF, allowed
+                    } else if (allowed(c)) {
                         b.append(c);
+                    } else {
+                        b.append('\uFFFD'); // XML 1.0 §2.2 forbids it even as a character reference
                     }
                 }
             }

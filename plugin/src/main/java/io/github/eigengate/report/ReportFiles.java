@@ -23,6 +23,30 @@ public final class ReportFiles {
     private ReportFiles() {
     }
 
+    /** Longest certificate file name kept as it is; file systems allow 255 bytes. */
+    static final int MAX_NAME = 120;
+
+    /**
+     * The file a certificate is written to: its name when that is short and plain ({@code [A-Za-z0-9._-]}), else a
+     * plain prefix of it and the start of its SHA-256, so that an id with a path separator, characters a file system
+     * cannot encode, or 300 bytes still gives one safe, distinct, reproducible file name.
+     */
+    static String fileName(String name) {
+        if (name.length() <= MAX_NAME && name.matches("[A-Za-z0-9._-]+") && !name.startsWith(".")) {
+            return name;
+        }
+        String plain = name.replaceAll("[^A-Za-z0-9._-]", "_").replaceFirst("^\\.+", "_");
+        if (plain.length() > 60) {
+            plain = plain.substring(0, 60);
+        }
+        try {
+            byte[] h = java.security.MessageDigest.getInstance("SHA-256").digest(name.getBytes(StandardCharsets.UTF_8));
+            return plain + "-" + java.util.HexFormat.of().formatHex(h, 0, 8) + ".txt";
+        } catch (java.security.NoSuchAlgorithmException e) {
+            throw new IllegalStateException("SHA-256 is required of every JDK", e);
+        }
+    }
+
     public static void write(Report report, Path dir) throws IOException {
         write(report, dir, List.of(), Set.copyOf(FORMATS));
     }
@@ -54,7 +78,7 @@ public final class ReportFiles {
         if (!report.certificates().isEmpty()) {
             Files.createDirectories(certs);
             for (Certificate c : report.certificates()) {
-                Files.writeString(certs.resolve(c.name()), c.text(), StandardCharsets.UTF_8);
+                Files.writeString(certs.resolve(fileName(c.name())), c.text(), StandardCharsets.UTF_8);
             }
         }
     }

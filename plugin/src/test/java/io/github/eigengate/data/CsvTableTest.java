@@ -88,22 +88,85 @@ public class CsvTableTest {
     }
 
     @Test
-    void invalidUtf8IsAnError() throws IOException {
-        Files.write(dir.resolve("t.csv"), new byte[] {'a', ',', 'b', '\n', (byte) 0xff, ',', '1', '\n'});
+    void invalidUtf8IsReportedAtItsLineAndTheRestIsRead() throws IOException {
+        Files.write(dir.resolve("t.csv"), new byte[] {'a', ',', 'b', '\n', (byte) 0xff, ',', '1', '\n', '3', ',',
+            '4', '\n'});
         Recorded p = new Recorded();
-        boolean ok = CsvTable.of(dir.resolve("t.csv"), "t.csv", List.of("a"), List.of()).read(p, row -> { });
-        assertFalse(ok);
-        assertEquals(List.of("t.csv table=t.csv | UTF-8 text | bytes that are not UTF-8 | the file is not valid "
-                + "UTF-8"), p.errors);
+        List<String> seen = new ArrayList<>();
+        boolean ok = CsvTable.of(dir.resolve("t.csv"), "t.csv", List.of("a"), List.of()).read(p,
+                row -> seen.add(row.line() + ":" + row.get("a")));
+        assertTrue(ok);
+        assertEquals(List.of("3:3"), seen);
+        assertEquals(List.of("t.csv:2 table=t.csv | UTF-8 text | bytes that are not UTF-8 | line 2 is not valid "
+                + "UTF-8; it is not read"), p.errors);
+    }
+
+    /** Regression (fuzzing, issue 14): an undecodable byte past the first 8 KB was reported at line 1, and the rest dropped. */
+    @Test
+    void invalidUtf8FarIntoTheFileIsReportedAtItsLine() throws IOException {
+        java.io.ByteArrayOutputStream b = new java.io.ByteArrayOutputStream();
+        b.writeBytes("# a comment\na,b\n".getBytes(java.nio.charset.StandardCharsets.UTF_8));
+        for (int i = 1; i <= 3000; i++) {
+            b.writeBytes((i + ",é\n").getBytes(java.nio.charset.StandardCharsets.UTF_8));
+        }
+        b.write(0xc3); // a lead byte whose continuation is missing: line 3003
+        b.writeBytes(",x\n3001,y\n3002,\"two\nlines \u00e9\"\n".getBytes(java.nio.charset.StandardCharsets.UTF_8));
+        b.write(0xe2);
+        b.write(0x82); // truncated at the end of the file: line 3007
+        Files.write(dir.resolve("t.csv"), b.toByteArray());
+        Recorded p = new Recorded();
+        List<String> seen = new ArrayList<>();
+        CsvTable.of(dir.resolve("t.csv"), "t.csv", List.of("a"), List.of()).read(p,
+                row -> seen.add(row.line() + ":" + row.get("a")));
+        assertEquals(3002, seen.size());
+        assertEquals(List.of("3:1", "3004:3001", "3005:3002"), List.of(seen.get(0), seen.get(3000), seen.get(3001)));
+        assertEquals(List.of("t.csv:3003 table=t.csv | UTF-8 text | bytes that are not UTF-8 | line 3003 is not valid "
+                + "UTF-8; it is not read", "t.csv:3007 table=t.csv | UTF-8 text | bytes that are not UTF-8 | line 3007 "
+                + "is not valid UTF-8; it is not read"), p.errors);
     }
 
     @Test
-    void duplicateHeaderIsAnError() {
+    void duplicateHeaderIsAnErrorAtTheHeadersLine() {
         Recorded p = new Recorded();
-        lines("a,a\n1,2\n", List.of("a"), List.of(), p);
-        assertEquals(1, p.errors.size());
-        assertTrue(p.errors.get(0).startsWith("t.csv:1 table=t.csv | a header row of distinct names"),
-                p.errors.get(0));
+        lines("# made by hand\n# second comment\na,a\n1,2\n", List.of("a"), List.of(), p);
+        assertEquals(List.of("t.csv:3:2 table=t.csv | distinct column names | a | the column 'a' appears twice in the "
+                + "header (columns 1 and 2)"), p.errors);
+    }
+
+    @Test
+    void anEmptyHeaderNameIsAnErrorAtItsColumn() {
+        Recorded p = new Recorded();
+        lines("# comment\na,,b\n1,2,3\n", List.of("a"), List.of("b"), p);
+        assertEquals(List.of("t.csv:2:2 table=t.csv | a column name | an empty cell | column 2 of the header has no "
+                + "name"), p.errors);
+    }
+
+    @Test
+    void surplusCellsAreReported() {
+        Recorded p = new Recorded();
+        List<String> seen = lines("a,b\n1,2,3\n4,5,\n6,7\n", List.of("a", "b"), List.of(), p);
+        assertEquals(List.of("3:4/5@2", "4:6/7@2"), seen);
+        assertEquals(List.of("t.csv:2:3 table=t.csv | 2 cells | 3 cells | the row has more cells than the header has "
+                + "columns (2): a comma too many, or a cell that needs quotes; the row is skipped"), p.errors);
+        assertEquals(List.of("t.csv:3:3 table=t.csv | 2 cells | 3 cells | the row has empty cells beyond the header's 2 "
+                + "columns; they are ignored"), p.warnings);
+    }
+
+    @Test
+    void aByteOrderMarkBeforeACommentAndBlankLinesAreNotRows() {
+        Recorded p = new Recorded();
+        List<String> seen = lines("\uFEFF# comment\na,b\n   \n1,2\n \t \n", List.of("a", "b"), List.of(), p);
+        assertEquals(List.of("4:1/2@2"), seen);
+        assertEquals(List.of(), p.errors);
+        assertEquals(List.of(), p.warnings);
+    }
+
+    @Test
+    void theExpectedColumnsOfAnUnknownColumnAreInContractOrder() {
+        Recorded p = new Recorded();
+        lines("a,b0,zz\n1,2,3\n", List.of("a", "b0"), List.of("c", "d", "e", "f", "g", "h"), p);
+        assertEquals(List.of("t.csv:1:3 table=t.csv | one of a,b0,c,d,e,f,g,h | zz | unknown column 'zz' is "
+                + "ignored"), p.warnings);
     }
 
     @Test

@@ -107,10 +107,10 @@ class SpaceChecksTest {
     void emptySpaceIsANoteAndOddWeightIsRejected() {
         Report r = run("id,level,weight\n", "form,n,value\n", "level,weight\n13,2\n23,1\n");
         assertEquals(List.of(
-                "data/spaces.csv:3:2: error [table-format] space=line 3: expected an even weight, found 1; with the "
-                        + "trivial character there are no forms of odd weight (−I ∈ Γ0(N) acts as (−1)^k)",
                 "data/spaces.csv:2: note [space-dimension] space=N=13 k=2: the space is empty (dimension 0) and no "
-                        + "forms are declared"),
+                        + "forms are declared",
+                "data/spaces.csv:3:2: error [table-format] space=line 3: expected an even weight, found 1; with the "
+                        + "trivial character there are no forms of odd weight (−I ∈ Γ0(N) acts as (−1)^k)"),
                 Datasets.lines(r));
     }
 

@@ -268,6 +268,9 @@ class WeightChecksTest {
                         + "x+1; the form has rational coefficients: reduction is mod p",
                 "data/modp-weights.csv:9:3: error [table-format] form=f23 p=11: expected one of x + 3; x + 7, "
                         + "found x + 4; not a monic irreducible factor of x^2 - x - 1 modulo 11",
+                "data/modp-weights.csv:10:4: note [weight-of-form] form=f23 p=11 prime=x + 3: a_11 ≡ 1 mod (11, "
+                        + "x + 3): ordinary and no companion form of weight 10 is declared in congruences.csv: assumed "
+                        + "non-split at 11 (Gross 1990); write local=split if it splits",
                 "data/modp-weights.csv:11: error [table-format] form=f23 p=11 prime=x + 3: expected one row per "
                         + "form, p and prime, found a second row; this representation already has a row at line 10; this "
                         + "row is left out",
@@ -276,6 +279,9 @@ class WeightChecksTest {
                 "data/modp-weights.csv:12:6: error [table-format] form=e11 p=7: expected (r,s);(r,s);... with 0 "
                         + "≤ r ≤ 6, 0 ≤ s ≤ 5, found (7,0); weight set \"(7,0)\", column 2: r = 7 is out of range 0..6 "
                         + "for p = 7",
+                "data/modp-weights.csv:12:4: note [weight-of-form] form=e11 p=7: a_7 ≡ 5 mod 7: ordinary and no "
+                        + "companion form of weight 6 is declared in congruences.csv: assumed non-split at 7 (Gross "
+                        + "1990); write local=split if it splits",
                 "data/modp-weights.csv:13:8: error [table-format] p=7: expected n with n ≢ 0 mod p + 1, found "
                         + "8; irreducible shape with n = 8 for p = 7: n ≡ 0 mod p + 1 = 8, so ω₂^n = ω^1 has level 1 and "
                         + "ω₂^n ⊕ ω₂^{pn} is reducible; use split/nonsplit instead",
@@ -286,23 +292,12 @@ class WeightChecksTest {
                         + "of integers of Q[x]/(x^2 - 125) (Dedekind's criterion), so the primes above 5 cannot be named "
                         + "by the factors of the defining polynomial modulo 5",
                 "data/modp-weights.csv:16:2: error [table-format] p=?: expected a prime p ≥ 5, found an empty "
-                        + "cell; 'p' must be a prime number",
-                "data/modp-weights.csv:10:4: note [weight-of-form] form=f23 p=11 prime=x + 3: a_11 ≡ 1 mod (11, "
-                        + "x + 3): ordinary and no companion form of weight 10 is declared in congruences.csv: assumed "
-                        + "non-split at 11 (Gross 1990); write local=split if it splits",
-                "data/modp-weights.csv:12:4: note [weight-of-form] form=e11 p=7: a_7 ≡ 5 mod 7: ordinary and no "
-                        + "companion form of weight 6 is declared in congruences.csv: assumed non-split at 7 (Gross "
-                        + "1990); write local=split if it splits"), lines);
+                        + "cell; 'p' must be a prime number"), lines);
     }
 
     @Test
     void rowsThatNeedAShapeOrAMissingAPAreErrors() {
         assertEquals(List.of(
-                "data/modp-weights.csv:5:3: error [table-format] form=f23 p=11: expected one of x + 3; x + 7, "
-                        + "found an empty cell; several primes lie above 11 in Q[x]/(x^2 - x - 1): name one in 'prime'",
-                "data/modp-weights.csv:6:6: error [table-format] form=e11 p=19: expected (r,s);(r,s);... in one "
-                        + "quoted cell, found (0; the weight set was split at its commas: quote the cell, e.g. "
-                        + "\"(0,0);(4,0)\"; the row is left out",
                 "data/modp-weights.csv:2:7: error [table-format] form=w18 p=13: expected shape and exponents, "
                         + "found an empty cell; the weight 18 is outside 2 ≤ k ≤ p + 1 = 14: a_p decides ρ̄|I_p only for "
                         + "2 ≤ k ≤ p + 1 and p ∤ N (Deligne, Fontaine), so describe ρ̄ at p in 'shape' and 'exponents'",
@@ -310,7 +305,12 @@ class WeightChecksTest {
                         + "found an empty cell; p = 11 divides the level 11: a_p decides ρ̄|I_p only for 2 ≤ k ≤ p + 1 "
                         + "and p ∤ N (Deligne, Fontaine), so describe ρ̄ at p in 'shape' and 'exponents'",
                 "data/modp-weights.csv:4:1: error [table-format] form=e11 p=61: expected a_61 in the "
-                        + "coefficient tables, found none; a_61 of e11 is needed to tell ordinary from supersingular at 61"),
+                        + "coefficient tables, found none; a_61 of e11 is needed to tell ordinary from supersingular at 61",
+                "data/modp-weights.csv:5:3: error [table-format] form=f23 p=11: expected one of x + 3; x + 7, "
+                        + "found an empty cell; several primes lie above 11 in Q[x]/(x^2 - x - 1): name one in 'prime'",
+                "data/modp-weights.csv:6:6: error [table-format] form=e11 p=19: expected (r,s);(r,s);... in one "
+                        + "quoted cell, found (0; the weight set was split at its commas: quote the cell, e.g. "
+                        + "\"(0,0);(4,0)\"; the row is left out"),
                 Scenario.weights("w18,13,,,,,,", "e11,11,,,,,,", "e11,61,,,,,,",
                 "f23,11,,,,,,", "e11,19,,,,(0,0);(18,0),,").lines(dir));
     }
