@@ -188,11 +188,11 @@ class CharactersTest {
         List<String> lines = Datasets.lines(Datasets.run(dir)).stream()
                 .filter(l -> l.contains("[reducible]") || l.contains("reducible.csv")).toList();
         assertEquals(List.of(
-                "data/reducible.csv:5:6: error [table-format] reducible=lev13_wt2_chi6_o1 p=7: expected empty, 1, or g:a/b pairs joined by ';' with units 1 < g < N that generate (Z/NZ)^× (a character mod N = 13), found 4:1/6; the generators do not generate (Z/13Z)^×: they reach 6 of its 12 elements",
-                "data/reducible.csv:6:6: error [table-format] reducible=lev13_wt2_chi6_o1 p=7: expected a character whose order divides that of χ_f (6), so its values lie in the form's field, found 2:1/4; its order is 4",
                 "data/reducible.csv:2: error [reducible] reducible=lev13_wt2_chi6_o1 p=7 i=0 j=1: expected ψφ = χ_f, found ψφ = 1, χ_f = 2:1/6; the claim is false: ρ̄_f^ss ≅ ψω^i ⊕ φω^j gives det ρ̄_f = ψφω^(i+j), while det ρ̄_f = (χ_f mod 𝔭)ω^(k-1); p ∤ N and p ∤ ord(ψφχ̄_f), so ψφ ≠ χ_f stays different mod 𝔭",
                 "data/reducible.csv:3: error [reducible] reducible=lev13_wt2_chi6_o1 p=7 i=0 j=1: expected a_2(lev13_wt2_chi6_o1) = ψ(2)*2^0 + φ(2)*2^1 = 5 mod (7, x + 4), found a_2(lev13_wt2_chi6_o1) = 3; the congruence fails at l = 2, the first prime l not dividing 91 where the residues differ",
-                "data/reducible.csv:4: error [reducible] reducible=lev13_wt2_chi6_o1 p=7 i=0 j=0: expected k - 1 = i + j mod 6, found k=2, i=0, j=0; the claim is false: det of the mod-p representation of lev13_wt2_chi6_o1 is omega^1, not omega^(i+j), so a_l differs from l^i + l^j at a positive density of primes (Chebotarev, Brauer–Nesbitt)"), lines);
+                "data/reducible.csv:4: error [reducible] reducible=lev13_wt2_chi6_o1 p=7 i=0 j=0: expected k - 1 = i + j mod 6, found k=2, i=0, j=0; the claim is false: det of the mod-p representation of lev13_wt2_chi6_o1 is omega^1, not omega^(i+j), so a_l differs from l^i + l^j at a positive density of primes (Chebotarev, Brauer–Nesbitt)",
+                "data/reducible.csv:5:6: error [table-format] reducible=lev13_wt2_chi6_o1 p=7: expected empty, 1, or g:a/b pairs joined by ';' with units 1 < g < N that generate (Z/NZ)^× (a character mod N = 13), found 4:1/6; the generators do not generate (Z/13Z)^×: they reach 6 of its 12 elements",
+                "data/reducible.csv:6:6: error [table-format] reducible=lev13_wt2_chi6_o1 p=7: expected a character whose order divides that of χ_f (6), so its values lie in the form's field, found 2:1/4; its order is 4"), lines);
     }
 
     /**

@@ -94,6 +94,33 @@ class ParallelAndCacheTest {
                 dir.resolve("three")));
     }
 
+    /** Every file a run writes as the goal and the command line do it (report.html included), with the console. */
+    private Map<String, String> fullRun(Settings settings, List<Gate.Dataset> sets, String name) throws IOException {
+        Path out = dir.resolve(name);
+        Report r = io.github.eigengate.report.GateRun.run(settings, sets, out, Set.copyOf(ReportFiles.FORMATS),
+                List.of());
+        Map<String, String> all = new TreeMap<>();
+        try (Stream<Path> s = Files.walk(out)) {
+            for (Path p : s.filter(Files::isRegularFile).toList()) {
+                all.put(out.relativize(p).toString(), Files.readString(p, StandardCharsets.UTF_8));
+            }
+        }
+        all.put("console", r.summary() + "\n" + String.join("\n", Datasets.lines(r)));
+        return all;
+    }
+
+    @Test
+    void theHtmlReportIsTheSameAtOneAndFourThreadsAndFromTheCache() throws IOException {
+        List<Gate.Dataset> sets = withPlanted();
+        Map<String, String> one = fullRun(base(), sets, "html-one");
+        assertTrue(one.containsKey("report.html"), one.keySet().toString());
+        assertTrue(one.get("report.html").contains("eg-scatter"), "plots drawn");
+        assertEquals(one, fullRun(base().withThreads(4), sets, "html-four"));
+        Path cache = dir.resolve("html-cache");
+        assertEquals(one, fullRun(base().withCache(cache).withThreads(2), sets, "html-cold"));
+        assertEquals(one, fullRun(base().withCache(cache), sets, "html-warm"));
+    }
+
     @Test
     void aCachedRunWritesTheSameReportsAndAChangeIsSeen() throws IOException {
         List<Gate.Dataset> sets = withPlanted();

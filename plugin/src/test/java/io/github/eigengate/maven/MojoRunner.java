@@ -25,6 +25,11 @@ public final class MojoRunner {
         set(m, "basedir", basedir.toFile());
         set(m, "failOnError", true);
         set(m, "failOnWarning", false);
+        // the defaults the plugin descriptor would inject (CheckMojo's @Parameter defaultValue)
+        set(m, "cache", false);
+        set(m, "workBudget", 10_000_000_000L);
+        set(m, "overBudget", "error");
+        set(m, "root", basedir.toFile());
         return m;
     }
 

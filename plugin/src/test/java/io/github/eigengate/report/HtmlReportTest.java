@@ -46,8 +46,8 @@ class HtmlReportTest {
         List<Element> rows = d.select("#findings-table tr.eg-finding");
         assertEquals(10, rows.size());
         Element deligne = d.selectFirst("tr.eg-finding[data-check=ramanujan-bound]");
-        assertEquals("finding-7", deligne.id());
-        assertEquals("7 error ramanujan-bound data/coefficients.csv:12 form=lev11_wt2_o1 n=7 a_p^2 <= 4*p^(k-1) = 28 "
+        assertEquals("finding-4", deligne.id());
+        assertEquals("4 error ramanujan-bound data/coefficients.csv:12 form=lev11_wt2_o1 n=7 a_p^2 <= 4*p^(k-1) = 28 "
                 + "a_p^2 = 81 Deligne's bound |a_p| <= 2 p^((k-1)/2) fails at p=7", deligne.text());
         assertEquals("#form-data--lev11_5f_wt2_5f_o1", deligne.selectFirst("td.eg-subject a").attr("href"));
         assertEquals("error", deligne.attr("data-severity"));
@@ -111,7 +111,7 @@ class HtmlReportTest {
         Finding f = new Finding("normalisation", Severity.ERROR, new SourceLocation("data/" + evil, 3, 0),
                 Subject.form(evil, "n=1"), evil, evil, evil);
         Report r = new Report(List.of("data"), List.of("normalisation"), List.of(f), Map.of(Severity.ERROR, 1), 0,
-                Map.of("normalisation", Set.of(Subject.form(evil))), 1, 1, List.of(),
+                Map.of("normalisation", Set.of(Subject.form(evil))), 1, 1, List.of(), List.of(),
                 Map.of("data", Map.of("normalisation", Set.of(Subject.form(evil)))),
                 List.of(new Measure("data", "space-dimension", new Subject("space", evil, ""), "formula", evil)));
         FormSeries s = new FormSeries("data", 0, 0, evil, 11, 2, 1, new long[] {2}, new double[][] {{-0.5}}, 0, "",

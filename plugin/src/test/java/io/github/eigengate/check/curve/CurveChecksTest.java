@@ -42,9 +42,9 @@ class CurveChecksTest {
     void plantedErrorsFailWithFormAndPrime() {
         Report r = Datasets.run(Fixture.dataset("curves-planted"));
         assertEquals(List.of(
-                "data/curves.csv:12:2: error [table-format] form=f27_1: expected a model with nonzero discriminant, "
-                        + "found discriminant 0; the cubic [0,0,0,-3,2] is singular (a node or a cusp), not an "
-                        + "elliptic curve",
+                "data/curves.csv:9:2: error [curve-conductor] form=f11_1 p=2: expected f_2 = 0 (level 11), found "
+                        + "f_2 = 4 (Kodaira II*, c_2 = 1); the conductor of [0,1,0,-165,1427] is 176 by Tate's "
+                        + "algorithm, but the level of the form is 11 (modularity: N_E = level)",
                 "data/curves.csv:9:2: error [curve-traces] form=f11_1 p=2: expected a_2 = -2 "
                         + "(data/coefficients.csv:6), found a_2 = 0 (the curve); a_p of the curve "
                         + "[0,1,0,-165,1427] must equal a_p of the form (modularity); they differ at 49 of the 95 "
@@ -54,11 +54,11 @@ class CurveChecksTest {
                         + "(data/coefficients.csv:506), found a_2 = 0 (the curve); a_p of the curve [0,1,1,-23,-50] "
                         + "must equal a_p of the form (modularity); they differ at 84 of the 95 primes p ≤ 499 of "
                         + "the table",
-                "data/curves.csv:9:2: error [curve-conductor] form=f11_1 p=2: expected f_2 = 0 (level 11), found "
-                        + "f_2 = 4 (Kodaira II*, c_2 = 1); the conductor of [0,1,0,-165,1427] is 176 by Tate's "
-                        + "algorithm, but the level of the form is 11 (modularity: N_E = level)",
                 "data/curves.csv:11:3: error [curve-torsion] form=f5077_1 torsion: expected 1, found 3; E(Q)_tors of "
-                        + "[0,0,1,-7,6] has order 1 (division polynomials, bounded by #E(F_p) at good primes)"),
+                        + "[0,0,1,-7,6] has order 1 (division polynomials, bounded by #E(F_p) at good primes)",
+                "data/curves.csv:12:2: error [table-format] form=f27_1: expected a model with nonzero discriminant, "
+                        + "found discriminant 0; the cubic [0,0,0,-3,2] is singular (a node or a cusp), not an "
+                        + "elliptic curve"),
                 Datasets.lines(r));
     }
 }

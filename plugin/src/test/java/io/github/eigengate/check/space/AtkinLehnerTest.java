@@ -55,15 +55,15 @@ class AtkinLehnerTest {
         String forms = forms().replace("lev30_wt2_o1,30,2,,,2:+1;3:-1;5:+1,+1", "lev30_wt2_o1,30,2,,,2:-1;3:-1;5:+1,+1");
         int row = line(forms, "lev30_wt2_o1,");
         int aq = line(Fixture.of("datasets/primesonly/coefficients.csv").text(), "lev30_wt2_o1,2,");
-        assertEquals(List.of("data/coefficients.csv:" + aq + ": error [atkin-lehner] form=lev30_wt2_o1 q=2: expected "
-                        + "a_2 = 1, found a_2 = -1 with w_2 = -1; for q ‖ N a newform has a_q = -w_q q^(k/2-1) "
-                        + "(Atkin–Lehner 1970, Thm 3): the sign in atkin_lehner or a_2 is wrong",
-                "data/forms.csv:" + row + ":7: error [atkin-lehner] form=lev30_wt2_o1 root_number: expected -1, found "
+        assertEquals(List.of("data/forms.csv:" + row + ":7: error [atkin-lehner] form=lev30_wt2_o1 root_number: expected -1, found "
                         + "+1; the root number is (-1)^(k/2) ∏_{q | N} w_q = -1 for these signs (Atkin–Lehner 1970, "
                         + "Thm 3): root_number or a sign is wrong",
                 "data/spaces.csv:10: error [atkin-lehner-count] space=N=30 k=2 q=2: expected 1 with w_2 = +1, 0 with "
                         + "-1, found 0 with +1, 1 with -1 (lev30_wt2_o1:-1); Tr(W_2 | S_k^new) = 1 = -Tr(U_2)/2^(k/2-1) "
-                        + "(Atkin–Lehner 1970, Thm 3): a sign in atkin_lehner is wrong or an orbit is missing"),
+                        + "(Atkin–Lehner 1970, Thm 3): a sign in atkin_lehner is wrong or an orbit is missing",
+                "data/coefficients.csv:" + aq + ": error [atkin-lehner] form=lev30_wt2_o1 q=2: expected "
+                        + "a_2 = 1, found a_2 = -1 with w_2 = -1; for q ‖ N a newform has a_q = -w_q q^(k/2-1) "
+                        + "(Atkin–Lehner 1970, Thm 3): the sign in atkin_lehner or a_2 is wrong"),
                 run(forms, new AtkinLehner(), new AtkinLehnerCount()));
     }
 

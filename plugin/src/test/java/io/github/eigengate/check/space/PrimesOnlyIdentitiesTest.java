@@ -49,14 +49,14 @@ class PrimesOnlyIdentitiesTest {
         assertEquals("2*x", f.valueOf("lev29_wt2_o1", 7));
         f.plant("lev29_wt2_o1", 7, "-2*x");
         assertEquals(List.of(), run(f, new SpaceTraces()));
-        assertEquals(List.of("data/coefficients.csv:" + f.lineOf("lev29_wt2_o1", 7) + ": error [space-trace-products] "
+        assertEquals(List.of("data/spaces.csv:9: error [space-trace-products] space=N=29 k=2 pq=2*7: expected Tr T_14 = 8, found Σ "
+                        + "Tr(a_2 a_7) = -8; Σ_f Tr(a_p a_q) = Tr T_pq fails at pq = 2*7, 3*7, 7*11, 7*13, 7*17 and 14 "
+                        + "more of 110 compared: an orbit is missing or listed twice, or an a_p is wrong",
+                "data/coefficients.csv:" + f.lineOf("lev29_wt2_o1", 7) + ": error [space-trace-products] "
                         + "form=lev29_wt2_o1 n=7: expected 2*x, found -2*x; likely culprit: Σ_f Tr(a_p a_q) = Tr T_pq "
                         + "fails in space N=29 k=2 at pq = 2*7, 3*7, 7*11, 7*13, 7*17 and 14 more, all involving a_7; "
                         + "a_7 = 2*x in this form makes every identity at 7 hold (and Σ_f Tr(a_7^2) too); the value "
-                        + "found is σ(2*x) for the automorphism σ: x ↦ -x of K",
-                "data/spaces.csv:9: error [space-trace-products] space=N=29 k=2 pq=2*7: expected Tr T_14 = 8, found Σ "
-                        + "Tr(a_2 a_7) = -8; Σ_f Tr(a_p a_q) = Tr T_pq fails at pq = 2*7, 3*7, 7*11, 7*13, 7*17 and 14 "
-                        + "more of 110 compared: an orbit is missing or listed twice, or an a_p is wrong"),
+                        + "found is σ(2*x) for the automorphism σ: x ↦ -x of K"),
                 run(f, identities()));
     }
 
@@ -66,22 +66,22 @@ class PrimesOnlyIdentitiesTest {
         Fixture f = Fixture.of("datasets/primesonly/coefficients.csv");
         assertEquals("13", f.valueOf("lev13_wt4_o1", 13));
         f.plant("lev13_wt4_o1", 13, "-13");
-        assertEquals(List.of("data/coefficients.csv:" + f.lineOf("lev13_wt4_o1", 13) + ": error "
+        assertEquals(List.of("data/spaces.csv:13: error [space-trace-products] space=N=13 k=4 pq=2*13: expected Tr T_26 = -78, found "
+                        + "Σ Tr(a_2 a_13) = 52; Σ_f Tr(a_p a_q) = Tr T_pq fails at pq = 2*13, 3*13, 5*13, 7*13, 11*13 and "
+                        + "19 more of 110 compared: an orbit is missing or listed twice, or an a_p is wrong",
+                "data/spaces.csv:13: error [space-traces-at-level] space=N=13 k=4 n=13: expected Tr T_13 = -13, found "
+                        + "sum of Tr(a_13) = -39; the declared forms' traces differ from the new-space trace at n = 13 "
+                        + "of 1 compared with (n, N) > 1: an orbit is missing or listed twice, or a coefficient (for "
+                        + "n = q ‖ N an Atkin–Lehner sign) is wrong",
+                "data/coefficients.csv:" + f.lineOf("lev13_wt4_o1", 13) + ": error "
                         + "[space-trace-products] form=lev13_wt4_o1 n=13: expected 13, found -13; likely culprit: Σ_f "
                         + "Tr(a_p a_q) = Tr T_pq fails in space N=13 k=4 at pq = 2*13, 3*13, 5*13, 7*13, 11*13 and 19 "
                         + "more, all involving a_13; a_13 = 13 in this form makes every identity at 13 hold",
-                "data/spaces.csv:13: error [space-trace-products] space=N=13 k=4 pq=2*13: expected Tr T_26 = -78, found "
-                        + "Σ Tr(a_2 a_13) = 52; Σ_f Tr(a_p a_q) = Tr T_pq fails at pq = 2*13, 3*13, 5*13, 7*13, 11*13 and "
-                        + "19 more of 110 compared: an orbit is missing or listed twice, or an a_p is wrong",
                 "data/coefficients.csv:" + f.lineOf("lev13_wt4_o1", 13) + ": error "
                         + "[space-traces-at-level] form=lev13_wt4_o1 n=13: expected 13, found -13; likely culprit: a "
                         + "wrong Atkin–Lehner sign at q = 13 ‖ N; with a_13 = 13 (w_13 of the opposite sign, a_q = "
                         + "-w_q q^(k/2-1)) the trace of U_13 on N=13 k=4 is right, and no other single form's sign "
-                        + "mends it",
-                "data/spaces.csv:13: error [space-traces-at-level] space=N=13 k=4 n=13: expected Tr T_13 = -13, found "
-                        + "sum of Tr(a_13) = -39; the declared forms' traces differ from the new-space trace at n = 13 "
-                        + "of 1 compared with (n, N) > 1: an orbit is missing or listed twice, or a coefficient (for "
-                        + "n = q ‖ N an Atkin–Lehner sign) is wrong"),
+                        + "mends it"),
                 run(f, identities()));
     }
 
@@ -114,16 +114,16 @@ class PrimesOnlyIdentitiesTest {
         f.plant("lev29_wt2_o1", 97, "-5*x - 4");
         assertEquals(List.of(), run(f, new SpaceTraces()));
         // Tr(a_2 a_97) = Tr((x - 1)(-6x - 4)) = -16, with the planted value -12; a_5 = -1 is rational, so 5*97 holds
-        assertEquals(List.of("data/coefficients.csv:137: error [space-trace-products] form=lev29_wt2_o1 n=97: expected "
-                        + "-6*x - 4, found -5*x - 4; likely culprit: Σ_f Tr(a_p a_q) = Tr T_pq fails in space N=29 k=2 "
-                        + "at pq = 2*97, 3*97, 7*97, all involving a_97; a_97 = -6*x - 4 in this form makes every "
-                        + "identity at 97 hold (and Σ_f Tr(a_97^2) too)",
-                "data/spaces.csv:9: error [space-trace-products] space=N=29 k=2 pq=2*97: expected Tr T_194 = -16, found "
+        assertEquals(List.of("data/spaces.csv:9: error [space-trace-products] space=N=29 k=2 pq=2*97: expected Tr T_194 = -16, found "
                         + "Σ Tr(a_2 a_97) = -12; Σ_f Tr(a_p a_q) = Tr T_pq fails at pq = 2*97, 3*97, 7*97 of 110 "
                         + "compared: an orbit is missing or listed twice, or an a_p is wrong",
                 "data/spaces.csv:9: error [space-trace-squares] space=N=29 k=2 p=97: expected Tr T_9409 + 97^1·2 = 176, "
                         + "found Σ Tr(a_97^2) = 132; Σ_f Tr(a_p^2) = Tr T_{p^2} + p^(k-1) dim fails at p = 97 of 24 "
-                        + "compared: an orbit is missing or listed twice, or an a_p is wrong"),
+                        + "compared: an orbit is missing or listed twice, or an a_p is wrong",
+                "data/coefficients.csv:137: error [space-trace-products] form=lev29_wt2_o1 n=97: expected "
+                        + "-6*x - 4, found -5*x - 4; likely culprit: Σ_f Tr(a_p a_q) = Tr T_pq fails in space N=29 k=2 "
+                        + "at pq = 2*97, 3*97, 7*97, all involving a_97; a_97 = -6*x - 4 in this form makes every "
+                        + "identity at 97 hold (and Σ_f Tr(a_97^2) too)"),
                 run(f, identities()));
     }
 
@@ -135,17 +135,17 @@ class PrimesOnlyIdentitiesTest {
         assertEquals("1", f.valueOf("lev37_wt2_o1", 37));
         f.plant("lev37_wt2_o1", 37, "-1");
         // o1: a_2 = 0, a_3 = 1; o2: a_2 = -2, a_3 = -3 (gp), so Tr T_111 = 1·1 + (-3)(-1) = 4 and 2*37 still holds
-        assertEquals(List.of("data/coefficients.csv:" + f.lineOf("lev37_wt2_o1", 37) + ": error [space-trace-products] "
-                        + "form=lev37_wt2_o1 n=37: expected 1, found -1; likely culprit: Σ_f Tr(a_p a_q) = Tr T_pq fails "
-                        + "in space N=37 k=2 at pq = 3*37, 7*37, 11*37, 13*37, 17*37 and 17 more, all involving a_37; "
-                        + "a_37 = 1 in this form makes every identity at 37 hold",
-                "data/spaces.csv:11: error [space-trace-products] space=N=37 k=2 pq=3*37: expected Tr T_111 = 4, found "
+        assertEquals(List.of("data/spaces.csv:11: error [space-trace-products] space=N=37 k=2 pq=3*37: expected Tr T_111 = 4, found "
                         + "Σ Tr(a_3 a_37) = 2; Σ_f Tr(a_p a_q) = Tr T_pq fails at pq = 3*37, 7*37, 11*37, 13*37, 17*37 and "
                         + "17 more of 110 compared: an orbit is missing or listed twice, or an a_p is wrong",
                 "data/spaces.csv:11: error [space-traces-at-level] space=N=37 k=2 n=37: expected Tr T_37 = 0, found sum "
                         + "of Tr(a_37) = -2; the declared forms' traces differ from the new-space trace at n = 37 of 1 "
                         + "compared with (n, N) > 1: an orbit is missing or listed twice, or a coefficient (for n = q ‖ N "
-                        + "an Atkin–Lehner sign) is wrong"),
+                        + "an Atkin–Lehner sign) is wrong",
+                "data/coefficients.csv:" + f.lineOf("lev37_wt2_o1", 37) + ": error [space-trace-products] "
+                        + "form=lev37_wt2_o1 n=37: expected 1, found -1; likely culprit: Σ_f Tr(a_p a_q) = Tr T_pq fails "
+                        + "in space N=37 k=2 at pq = 3*37, 7*37, 11*37, 13*37, 17*37 and 17 more, all involving a_37; "
+                        + "a_37 = 1 in this form makes every identity at 37 hold"),
                 run(f, identities()));
     }
 }

@@ -156,6 +156,9 @@ class SpaceCharacterTest {
         Report r = gate("level,weight,character\n13,4,2:1/3\n13,4,2:2/3\n13,3,2:1/3\n13,2,2:1/5\n20,2,3:1/4\n"
                 + "7,3,3:1/2\n");
         assertEquals(List.of(
+                "data/spaces.csv:2: error [space-dimension] space=N=13 k=4 χ=2:1/3: expected [Q(χ):Q]·dim "
+                        + "S_k^new(N, χ) = 2·3 = 6, found sum of field degrees = 0 (no forms); the declared forms do not "
+                        + "fill the new subspace: an orbit is missing (or a field is too small)",
                 "data/spaces.csv:3: warning [table-format] space=N=13 k=4 χ=2:2/3: expected each space once, found "
                         + "N=13 k=4 χ=2:2/3; the space is already declared at line 2 (Galois-conjugate characters name "
                         + "the same space)",
@@ -167,9 +170,6 @@ class SpaceCharacterTest {
                 "data/spaces.csv:6:3: error [table-format] space=line 6: expected " + CharacterCell.EXPECTED
                         + ", found 3:1/4; the character cannot be read: "
                         + CharacterCell.parse("3:1/4", 20).problem(),
-                "data/spaces.csv:2: error [space-dimension] space=N=13 k=4 χ=2:1/3: expected [Q(χ):Q]·dim "
-                        + "S_k^new(N, χ) = 2·3 = 6, found sum of field degrees = 0 (no forms); the declared forms do not "
-                        + "fill the new subspace: an orbit is missing (or a field is too small)",
                 "data/spaces.csv:7: error [space-dimension] space=N=7 k=3 χ=3:1/2: expected [Q(χ):Q]·dim "
                         + "S_k^new(N, χ) = 1·1 = 1, found sum of field degrees = 0 (no forms); the declared forms do not "
                         + "fill the new subspace: an orbit is missing (or a field is too small)"),
