@@ -183,6 +183,20 @@ class MainTest {
     }
 
     @Test
+    void threadsAndCacheDoNotChangeTheOutput() throws IOException {
+        demo("data", true);
+        Run one = run("--threads", "1", "--out", "one", "data");
+        Run two = run("--threads", "2", "--cache", "cache", "--out", "two", "data");
+        Run cached = run("--cache", "cache", "--out", "three", "data");
+        assertEquals(1, one.code());
+        assertEquals(one.lines().subList(0, 11), two.lines().subList(0, 11));
+        assertEquals(one.lines().subList(0, 11), cached.lines().subList(0, 11));
+        assertTrue(Files.isDirectory(dir.resolve("cache")), "the cache directory was written");
+        assertEquals(Files.readString(dir.resolve("one/report.json")), Files.readString(dir.resolve("three/report.json")));
+        assertEquals(2, run("--threads", "0", "data").code());
+    }
+
+    @Test
     void twoDatasetsAreCheckedAndNamed() throws IOException {
         demo("first", false);
         demo("second", true);
