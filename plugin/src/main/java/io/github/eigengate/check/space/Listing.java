@@ -2,6 +2,8 @@ package io.github.eigengate.check.space;
 
 import io.github.eigengate.arith.NumberField;
 import io.github.eigengate.arith.Rational;
+import io.github.eigengate.check.Check;
+import io.github.eigengate.check.FindingSink;
 import io.github.eigengate.check.Values;
 import io.github.eigengate.data.Catalog;
 import io.github.eigengate.data.Coefficients;
@@ -94,6 +96,35 @@ final class Listing {
     }
 
     /** The declared spaces, in file order. */
+    /** What an identity check does with one complete space: its row, its forms' entries, the listing. */
+    interface Judge {
+        void check(SpaceRow row, List<Entry> entries, Listing listing, FindingSink out);
+    }
+
+    /**
+     * The pass of an identity check: every form goes into this listing; at the end each declared space is recorded
+     * as examined and, when its listing is complete, judged.
+     */
+    Check.Pass pass(String id, Judge judge) {
+        return new Check.Pass() {
+            @Override
+            public void form(FormData<?> form, FindingSink out) {
+                add(form);
+            }
+
+            @Override
+            public void finish(FindingSink out) {
+                for (SpaceRow row : rows()) {
+                    out.examined(id, Spaces.subject(row.space()));
+                    List<Entry> es = complete(row.space());
+                    if (es != null) {
+                        judge.check(row, es, Listing.this, out);
+                    }
+                }
+            }
+        };
+    }
+
     List<SpaceRow> rows() {
         return List.copyOf(declared.values());
     }

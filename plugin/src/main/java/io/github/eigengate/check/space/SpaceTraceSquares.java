@@ -5,7 +5,6 @@ import io.github.eigengate.check.Check;
 import io.github.eigengate.check.Diagnosis;
 import io.github.eigengate.check.FindingSink;
 import io.github.eigengate.data.Catalog;
-import io.github.eigengate.data.FormData;
 import io.github.eigengate.data.SpaceRow;
 import io.github.eigengate.theory.Arith;
 import io.github.eigengate.theory.spaces.Dimensions;
@@ -39,24 +38,7 @@ public final class SpaceTraceSquares implements Check {
 
     @Override
     public Pass start(Catalog catalog) {
-        Listing listing = new Listing(catalog, (n, level) -> level % n != 0 && Arith.isPrime(n), false);
-        return new Pass() {
-            @Override
-            public void form(FormData<?> form, FindingSink out) {
-                listing.add(form);
-            }
-
-            @Override
-            public void finish(FindingSink out) {
-                for (SpaceRow row : listing.rows()) {
-                    out.examined(ID, Spaces.subject(row.space()));
-                    List<Listing.Entry> es = listing.complete(row.space());
-                    if (es != null) {
-                        check(row, es, listing, out);
-                    }
-                }
-            }
-        };
+        return new Listing(catalog, (n, level) -> level % n != 0 && Arith.isPrime(n), false).pass(ID, SpaceTraceSquares::check);
     }
 
     private static void check(SpaceRow row, List<Listing.Entry> es, Listing listing, FindingSink out) {

@@ -6,7 +6,6 @@ import io.github.eigengate.check.Diagnosis;
 import io.github.eigengate.check.FindingSink;
 import io.github.eigengate.check.Subject;
 import io.github.eigengate.data.Catalog;
-import io.github.eigengate.data.FormData;
 import io.github.eigengate.data.SpaceRow;
 import io.github.eigengate.theory.Arith;
 import io.github.eigengate.theory.spaces.NewSpaceTraces;
@@ -40,24 +39,7 @@ public final class SpaceTracesAtLevel implements Check {
 
     @Override
     public Pass start(Catalog catalog) {
-        Listing listing = new Listing(catalog, (n, level) -> Arith.gcd(n, level) > 1, true);
-        return new Pass() {
-            @Override
-            public void form(FormData<?> form, FindingSink out) {
-                listing.add(form);
-            }
-
-            @Override
-            public void finish(FindingSink out) {
-                for (SpaceRow row : listing.rows()) {
-                    out.examined(ID, Spaces.subject(row.space()));
-                    List<Listing.Entry> es = listing.complete(row.space());
-                    if (es != null) {
-                        check(row, es, listing, out);
-                    }
-                }
-            }
-        };
+        return new Listing(catalog, (n, level) -> Arith.gcd(n, level) > 1, true).pass(ID, SpaceTracesAtLevel::check);
     }
 
     private static void check(SpaceRow row, List<Listing.Entry> es, Listing listing, FindingSink out) {
