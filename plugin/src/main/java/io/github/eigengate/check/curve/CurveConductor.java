@@ -1,12 +1,11 @@
 package io.github.eigengate.check.curve;
 
-import io.github.eigengate.check.Check;
+import io.github.eigengate.check.CatalogCheck;
 import io.github.eigengate.check.FindingSink;
 import io.github.eigengate.check.Subject;
 import io.github.eigengate.data.Catalog;
 import io.github.eigengate.data.CurveRow;
 import io.github.eigengate.data.Form;
-import io.github.eigengate.data.FormData;
 import io.github.eigengate.theory.curves.Conductors;
 import io.github.eigengate.theory.curves.LocalReduction;
 import java.math.BigInteger;
@@ -18,7 +17,7 @@ import java.util.List;
  * computed by Tate's algorithm at 2, 3 and every prime of the level (Silverman, <i>Advanced Topics</i>, IV.9;
  * Cremona, <i>Algorithms</i>, §3.2) and Kraus's test at the other primes of Δ ({@link Conductors}).
  */
-public final class CurveConductor implements Check {
+public final class CurveConductor implements CatalogCheck {
 
     public static final String ID = "curve-conductor";
 
@@ -33,20 +32,10 @@ public final class CurveConductor implements Check {
     }
 
     @Override
-    public Pass start(Catalog catalog) {
-        return new Pass() {
-            @Override
-            public void form(FormData<?> form, FindingSink out) {
-                // needs only the catalog
-            }
-
-            @Override
-            public void finish(FindingSink out) {
-                for (CurveRow row : catalog.curves()) {
-                    check(catalog.form(row.form()), row, out);
-                }
-            }
-        };
+    public void check(Catalog catalog, FindingSink out) {
+        for (CurveRow row : catalog.curves()) {
+            check(catalog.form(row.form()), row, out);
+        }
     }
 
     private static void check(Form form, CurveRow row, FindingSink out) {

@@ -1,11 +1,10 @@
 package io.github.eigengate.check.curve;
 
-import io.github.eigengate.check.Check;
+import io.github.eigengate.check.CatalogCheck;
 import io.github.eigengate.check.FindingSink;
 import io.github.eigengate.check.Subject;
 import io.github.eigengate.data.Catalog;
 import io.github.eigengate.data.CurveRow;
-import io.github.eigengate.data.FormData;
 import io.github.eigengate.theory.curves.Torsion;
 
 /**
@@ -13,7 +12,7 @@ import io.github.eigengate.theory.curves.Torsion;
  * (Silverman, AEC VII.3.1, VII.3.4), the points found from the rational roots of division polynomials on the
  * integral short model (Nagell–Lutz, AEC VIII.7.2; Washington §3.2), within Mazur's list (AEC VIII.7.5).
  */
-public final class CurveTorsion implements Check {
+public final class CurveTorsion implements CatalogCheck {
 
     public static final String ID = "curve-torsion";
 
@@ -28,29 +27,19 @@ public final class CurveTorsion implements Check {
     }
 
     @Override
-    public Pass start(Catalog catalog) {
-        return new Pass() {
-            @Override
-            public void form(FormData<?> form, FindingSink out) {
-                // needs only the catalog
+    public void check(Catalog catalog, FindingSink out) {
+        for (CurveRow row : catalog.curves()) {
+            if (row.torsion() == null) {
+                continue;
             }
-
-            @Override
-            public void finish(FindingSink out) {
-                for (CurveRow row : catalog.curves()) {
-                    if (row.torsion() == null) {
-                        continue;
-                    }
-                    out.examined(ID, Subject.form(row.form()));
-                    int order = Torsion.order(row.model());
-                    if (order != row.torsion()) {
-                        out.error(ID, row.torsionAt(), Subject.form(row.form(), "torsion"),
-                                Integer.toString(order), Integer.toString(row.torsion()),
-                                "E(Q)_tors of " + row.model() + " has order " + order
-                                        + " (division polynomials, bounded by #E(F_p) at good primes)");
-                    }
-                }
+            out.examined(ID, Subject.form(row.form()));
+            int order = Torsion.order(row.model());
+            if (order != row.torsion()) {
+                out.error(ID, row.torsionAt(), Subject.form(row.form(), "torsion"),
+                        Integer.toString(order), Integer.toString(row.torsion()),
+                        "E(Q)_tors of " + row.model() + " has order " + order
+                                + " (division polynomials, bounded by #E(F_p) at good primes)");
             }
-        };
+        }
     }
 }

@@ -1,11 +1,10 @@
 package io.github.eigengate.check.space;
 
-import io.github.eigengate.check.Check;
+import io.github.eigengate.check.CatalogCheck;
 import io.github.eigengate.check.FindingSink;
 import io.github.eigengate.data.AtkinLehnerSigns;
 import io.github.eigengate.data.Catalog;
 import io.github.eigengate.data.Form;
-import io.github.eigengate.data.FormData;
 import io.github.eigengate.data.SpaceRow;
 import io.github.eigengate.theory.spaces.Dimensions;
 import io.github.eigengate.theory.spaces.HurwitzClassNumbers;
@@ -22,7 +21,7 @@ import java.util.List;
  * {@link NewSpaceTraces}. (Yamauchi 1973 and Skoruppa–Zagier 1988 give Tr W_Q on all of S_k(Γ0(N)) directly by
  * class numbers; that formula is not used here.) For q² | N nothing is compared. Trivial character only.
  */
-public final class AtkinLehnerCount implements Check {
+public final class AtkinLehnerCount implements CatalogCheck {
 
     public static final String ID = "atkin-lehner-count";
 
@@ -37,21 +36,11 @@ public final class AtkinLehnerCount implements Check {
     }
 
     @Override
-    public Pass start(Catalog catalog) {
-        return new Pass() {
-            @Override
-            public void form(FormData<?> form, FindingSink out) {
-                // needs only the catalog
-            }
-
-            @Override
-            public void finish(FindingSink out) {
-                for (SpaceRow row : catalog.spaces()) {
-                    out.examined(ID, Spaces.subject(row.space()));
-                    check(catalog, row, out);
-                }
-            }
-        };
+    public void check(Catalog catalog, FindingSink out) {
+        for (SpaceRow row : catalog.spaces()) {
+            out.examined(ID, Spaces.subject(row.space()));
+            check(catalog, row, out);
+        }
     }
 
     private static void check(Catalog catalog, SpaceRow row, FindingSink out) {

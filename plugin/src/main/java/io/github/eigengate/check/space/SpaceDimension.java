@@ -1,12 +1,11 @@
 package io.github.eigengate.check.space;
 
 import io.github.eigengate.arith.DirichletCharacter;
-import io.github.eigengate.check.Check;
+import io.github.eigengate.check.CatalogCheck;
 import io.github.eigengate.check.FindingSink;
 import io.github.eigengate.check.Subject;
 import io.github.eigengate.data.Catalog;
 import io.github.eigengate.data.Form;
-import io.github.eigengate.data.FormData;
 import io.github.eigengate.data.SpaceRow;
 import io.github.eigengate.theory.spaces.Dimensions;
 import java.util.ArrayList;
@@ -23,7 +22,7 @@ import java.util.List;
  * S_k^new(N, χ^σ)); the dimension is the Cohen–Oesterlé formula made new ({@link Dimensions#newforms(
  * io.github.eigengate.arith.DirichletCharacter, int)}). Weight 1 has no dimension formula: a note, never a pass.
  */
-public final class SpaceDimension implements Check {
+public final class SpaceDimension implements CatalogCheck {
 
     public static final String ID = "space-dimension";
 
@@ -38,20 +37,10 @@ public final class SpaceDimension implements Check {
     }
 
     @Override
-    public Pass start(Catalog catalog) {
-        return new Pass() {
-            @Override
-            public void form(FormData<?> form, FindingSink out) {
-                // needs only the catalog
-            }
-
-            @Override
-            public void finish(FindingSink out) {
-                for (SpaceRow row : catalog.spaces()) {
-                    check(catalog, row, out);
-                }
-            }
-        };
+    public void check(Catalog catalog, FindingSink out) {
+        for (SpaceRow row : catalog.spaces()) {
+            check(catalog, row, out);
+        }
     }
 
     private static void check(Catalog catalog, SpaceRow row, FindingSink out) {
