@@ -178,6 +178,25 @@ public final class DirichletCharacter {
         return (int) (s % order);
     }
 
+    /**
+     * Generators of (Z/NZ)^×, one per cyclic factor of its standard decomposition (a primitive root mod each odd
+     * p^a, and −1, 5 mod 2^a), each lifted by the Chinese remainder theorem to be 1 at the other prime powers. A
+     * character, or any homomorphism on (Z/NZ)^×, is determined by its values on them.
+     *
+     * @throws IllegalArgumentException if N is not in [1, {@value #MAX_MODULUS}]
+     */
+    public static long[] generators(int modulus) {
+        if (modulus < 1) {
+            throw new IllegalArgumentException("the modulus must be positive, was " + modulus);
+        }
+        Component[] cs = components(modulus);
+        long[] out = new long[cs.length];
+        for (int i = 0; i < cs.length; i++) {
+            out[i] = cs[i].lift;
+        }
+        return out;
+    }
+
     /** χ(−1) = −1. */
     public boolean isOdd() {
         return order % 2 == 0 && exponent(-1) == order / 2;

@@ -140,8 +140,9 @@ class CharactersTest {
      * Congruences between forms with a character (PARI/GP data of datasets/characters): lev13_wt2_chi6_o1 with
      * itself mod 7 at one prime above 7 is certified (one character, p ∤ 13·6, M = 13², B = ⌊2·182/12⌋ = 30); at the
      * two different primes (7, x + 4) and (7, x + 2) above 7 (the roots 3 and 5 of x^2 - x + 1 mod 7, so ζ6 reduces
-     * to 3 and to 5) the characters reduce differently and the claim is false; forms with different characters are
-     * not certified. A real congruence between weights 2 and 8 with the same character: lev13_wt8_chi6_o1 (the orbit
+     * to 3 and to 5) the characters reduce differently and the claim is false; lev13 and lev21 mod 5 have characters
+     * of order 6 with conductors 13 and 21, which stay different mod every prime above 5 (5 ∤ 6), so that claim is
+     * false from the determinant alone. A real congruence between weights 2 and 8 with the same character: lev13_wt8_chi6_o1 (the orbit
      * of degree 14 of S_8(13, χ)) ≡ lev13_wt2_chi6_o1 mod (7, x + 2) and (7, x + 4), where both zetas reduce to 3
      * (PARI/GP 2.15.2, with fixtures-gp/lib.gp and lib-characters.gp read, B = 150: f = ch_form(13,2,[2],1);
      * g = ch_form(13,8,[2],1); factormod(g[4], 7) has the factors x + 2 (ζ_g ≡ 3) and x + 4 (ζ_g ≡ 5); every prime
@@ -163,10 +164,10 @@ class CharactersTest {
                 .toList();
         assertEquals(List.of(
                 "data/congruences.csv:2: note [congruence] congruence=lev13_wt2_chi6_o1~lev13_wt2_chi6_o1 p=7: certified: a_l(lev13_wt2_chi6_o1) = l^0*a_l(lev13_wt2_chi6_o1) mod a prime above 7 for every prime l not dividing 91, having checked every l <= B = 30 (f♭ − g♭ (weight 2) on Γ0(169), a_p compared too; Sturm, LNM 1240, Thm 1)",
-                "data/congruences.csv:3: error [congruence] congruence=lev13_wt2_chi6_o1~lev13_wt2_chi6_o1 p=7: expected an identification of residue fields with zeta_lev13_wt2_chi6_o1 = zeta_lev13_wt2_chi6_o1, found none at the primes above 7; the congruence is false: under every choice of primes above 7 the reductions of χ_f and χ_g differ, so det ρ̄_f = (χ_f mod 𝔭)ω^(k_f-1) is not det(ρ̄_g ⊗ ω^j) = (χ_g mod 𝔭)ω^(k_g-1+2j) (Chebotarev, Brauer–Nesbitt)",
-                "data/congruences.csv:4: error [congruence] congruence=lev13_wt2_chi6_o1~lev21_wt2_chi6_o1 p=5: expected a certifiable congruence, found a_l(lev13_wt2_chi6_o1) = l^0*a_l(lev21_wt2_chi6_o1) mod a prime above 5; not certified: the characters of the two forms differ (2:1/6 mod 13, 8:1/2;10:1/6 mod 21): the Sturm-type bound is implemented for one common character only",
+                "data/congruences.csv:3: error [congruence] congruence=lev13_wt2_chi6_o1~lev13_wt2_chi6_o1 p=7: expected an identification of residue fields with (χ_f mod 𝔭)ω^(k_f-1) = (χ_g mod 𝔭)ω^(k_g-1+2j), found none at the primes above 7; the congruence is false: under every choice of primes above 7 the determinants differ, det ρ̄_f = (χ_f mod 𝔭)ω^(k_f-1) against det(ρ̄_g ⊗ ω^j) = (χ_g mod 𝔭)ω^(k_g-1+2j) on the units mod 91 (Chebotarev, Brauer–Nesbitt)",
+                "data/congruences.csv:4: error [congruence] congruence=lev13_wt2_chi6_o1~lev21_wt2_chi6_o1 p=5: expected an identification of residue fields with (χ_f mod 𝔭)ω^(k_f-1) = (χ_g mod 𝔭)ω^(k_g-1+2j), found none at the primes above 5; the congruence is false: under every choice of primes above 5 the determinants differ, det ρ̄_f = (χ_f mod 𝔭)ω^(k_f-1) against det(ρ̄_g ⊗ ω^j) = (χ_g mod 𝔭)ω^(k_g-1+2j) on the units mod 1365 (Chebotarev, Brauer–Nesbitt)",
                 "data/congruences.csv:5: note [congruence] congruence=lev13_wt2_chi6_o1~lev13_wt8_chi6_o1 p=7: certified: a_l(lev13_wt2_chi6_o1) = l^0*a_l(lev13_wt8_chi6_o1) mod a prime above 7 for every prime l not dividing 91, having checked every l <= B = 121 (f♭ − g♭ (weights 2, 8, brought to 8 by E_6) on Γ0(169), a_p compared too; Sturm, LNM 1240, Thm 1)",
-                "data/congruences.csv:6: error [congruence] congruence=lev13_wt2_chi6_o1~lev13_wt8_chi6_o1 p=7: expected an identification of residue fields with zeta_lev13_wt2_chi6_o1 = zeta_lev13_wt8_chi6_o1, found none at the primes above 7; the congruence is false: under every choice of primes above 7 the reductions of χ_f and χ_g differ, so det ρ̄_f = (χ_f mod 𝔭)ω^(k_f-1) is not det(ρ̄_g ⊗ ω^j) = (χ_g mod 𝔭)ω^(k_g-1+2j) (Chebotarev, Brauer–Nesbitt)"), lines);
+                "data/congruences.csv:6: error [congruence] congruence=lev13_wt2_chi6_o1~lev13_wt8_chi6_o1 p=7: expected an identification of residue fields with (χ_f mod 𝔭)ω^(k_f-1) = (χ_g mod 𝔭)ω^(k_g-1+2j), found none at the primes above 7; the congruence is false: under every choice of primes above 7 the determinants differ, det ρ̄_f = (χ_f mod 𝔭)ω^(k_f-1) against det(ρ̄_g ⊗ ω^j) = (χ_g mod 𝔭)ω^(k_g-1+2j) on the units mod 91 (Chebotarev, Brauer–Nesbitt)"), lines);
     }
 
     /**
@@ -188,9 +189,9 @@ class CharactersTest {
         List<String> lines = Datasets.lines(Datasets.run(dir)).stream()
                 .filter(l -> l.contains("[reducible]") || l.contains("reducible.csv")).toList();
         assertEquals(List.of(
-                "data/reducible.csv:2: error [reducible] reducible=lev13_wt2_chi6_o1 p=7 i=0 j=1: expected ψφ = χ_f, found ψφ = 1, χ_f = 2:1/6; the claim is false: ρ̄_f^ss ≅ ψω^i ⊕ φω^j gives det ρ̄_f = ψφω^(i+j), while det ρ̄_f = (χ_f mod 𝔭)ω^(k-1); p ∤ N and p ∤ ord(ψφχ̄_f), so ψφ ≠ χ_f stays different mod 𝔭",
+                "data/reducible.csv:2: error [reducible] reducible=lev13_wt2_chi6_o1 p=7 i=0 j=1: expected a prime above 7 with (χ_f mod 𝔭)ω^(k-1) = (ψφ mod 𝔭)ω^(i+j), found none (χ_f = 2:1/6, ψφ = 1); the claim is false: ρ̄_f^ss ≅ ψω^i ⊕ φω^j gives det ρ̄_f = ψφω^(i+j), while det ρ̄_f = (χ_f mod 𝔭)ω^(k-1), and the two differ on the units mod 91 at every prime above 7 (Chebotarev, Brauer–Nesbitt)",
                 "data/reducible.csv:3: error [reducible] reducible=lev13_wt2_chi6_o1 p=7 i=0 j=1: expected a_2(lev13_wt2_chi6_o1) = ψ(2)*2^0 + φ(2)*2^1 = 5 mod (7, x + 4), found a_2(lev13_wt2_chi6_o1) = 3; the congruence fails at l = 2, the first prime l not dividing 91 where the residues differ",
-                "data/reducible.csv:4: error [reducible] reducible=lev13_wt2_chi6_o1 p=7 i=0 j=0: expected k - 1 = i + j mod 6, found k=2, i=0, j=0; the claim is false: det of the mod-p representation of lev13_wt2_chi6_o1 is omega^1, not omega^(i+j), so a_l differs from l^i + l^j at a positive density of primes (Chebotarev, Brauer–Nesbitt)",
+                "data/reducible.csv:4: error [reducible] reducible=lev13_wt2_chi6_o1 p=7 i=0 j=0: expected k - 1 = i + j mod 6, found k=2, i=0, j=0; the claim is false: det of the mod-p representation of lev13_wt2_chi6_o1 is (χ_f mod 𝔭)omega^1, not (ψφ mod 𝔭)omega^(i+j) (p does not divide N, so the characters are unramified at p and the powers of omega must agree), so a_l differs from the claim at a positive density of primes (Chebotarev, Brauer–Nesbitt)",
                 "data/reducible.csv:5:6: error [table-format] reducible=lev13_wt2_chi6_o1 p=7: expected empty, 1, or g:a/b pairs joined by ';' with units 1 < g < N that generate (Z/NZ)^× (a character mod N = 13), found 4:1/6; the generators do not generate (Z/13Z)^×: they reach 6 of its 12 elements",
                 "data/reducible.csv:6:6: error [table-format] reducible=lev13_wt2_chi6_o1 p=7: expected a character whose order divides that of χ_f (6), so its values lie in the form's field, found 2:1/4; its order is 4"), lines);
     }
@@ -222,7 +223,9 @@ class CharactersTest {
      * Dihedral weight-1 forms are Eisenstein mod 3 with characters: the S3-representation of lev23_wt1_chi2_o1 reduces
      * mod 3 to 1 ⊕ χ, a_ℓ ≡ 1 + χ(ℓ) (PARI/GP: f23 = mfcoefs(mfeigenbasis(mfinit([23,1,[znstar(23,1),[11]]],0))[1],
      * 150); [l | l <- primes(35), l != 3 && l != 23 && (f23[l+1] - 1 - kronecker(-23, l)) % 3] is empty). The row
-     * holds for every ℓ in the tables and is not certified (no bound with characters); the same claim mod 5 for
+     * is certified: f♭ − E_1^{1,χ}♭ of weight 1 on Γ0(23²) gives B = ⌊552/12⌋ = 46 (Diamond–Shurman §4.8 for
+     * E_1^{ψ,φ}), and at p = 3 the tables give a_3 = -1 (PARI f23[4]) ≡ 1 + χ(3) = 2, with the same recursion
+     * constant χ(3) = 1 on both sides; the same claim mod 5 for
      * lev31_wt1_chi2_o1 fails first at ℓ = 2 (a_2 = -1, 1 + χ(2) = 2; same gp command with 31 and 5); ψφ = 1 ≠ χ is
      * false from the determinant alone.
      */
@@ -238,9 +241,9 @@ class CharactersTest {
         List<String> lines = Datasets.lines(Datasets.run(dir)).stream().filter(l -> l.contains("reducible.csv"))
                 .toList();
         assertEquals(List.of(
-                "data/reducible.csv:2: error [reducible] reducible=lev23_wt1_chi2_o1 p=3 i=0 j=0: expected a certifiable congruence, found a_l(lev23_wt1_chi2_o1) = ψ(l)*l^0 + φ(l)*l^0 mod a prime above 3 (ψ = 1, φ = 5:1/2); not certified: the Sturm-type bound for an Eisenstein series with characters ψ, φ is not implemented (see docs/congruences.md)",
+                "data/reducible.csv:2: note [reducible] reducible=lev23_wt1_chi2_o1 p=3 i=0 j=0: certified: a_l(lev23_wt1_chi2_o1) = ψ(l)*l^0 + φ(l)*l^0 mod a prime above 3 (ψ = 1, φ = 5:1/2) for every prime l not dividing 69, having checked every l <= B = 46 (f♭ − E^{ψ,φ}_1♭ (weight 1) on Γ0(529), a_p and the p-th Hecke recursion compared too; Sturm, LNM 1240, Thm 1)",
                 "data/reducible.csv:3: error [reducible] reducible=lev31_wt1_chi2_o1 p=5 i=0 j=0: expected a_2(lev31_wt1_chi2_o1) = ψ(2)*2^0 + φ(2)*2^0 = 2 mod (5, x), found a_2(lev31_wt1_chi2_o1) = 4; the congruence fails at l = 2, the first prime l not dividing 155 where the residues differ",
-                "data/reducible.csv:4: error [reducible] reducible=lev23_wt1_chi2_o1 p=3 i=0 j=0: expected ψφ = χ_f, found ψφ = 1, χ_f = 5:1/2; the claim is false: ρ̄_f^ss ≅ ψω^i ⊕ φω^j gives det ρ̄_f = ψφω^(i+j), while det ρ̄_f = (χ_f mod 𝔭)ω^(k-1); p ∤ N and p ∤ ord(ψφχ̄_f), so ψφ ≠ χ_f stays different mod 𝔭"), lines);
+                "data/reducible.csv:4: error [reducible] reducible=lev23_wt1_chi2_o1 p=3 i=0 j=0: expected a prime above 3 with (χ_f mod 𝔭)ω^(k-1) = (ψφ mod 𝔭)ω^(i+j), found none (χ_f = 5:1/2, ψφ = 1); the claim is false: ρ̄_f^ss ≅ ψω^i ⊕ φω^j gives det ρ̄_f = ψφω^(i+j), while det ρ̄_f = (χ_f mod 𝔭)ω^(k-1), and the two differ on the units mod 69 at every prime above 3 (Chebotarev, Brauer–Nesbitt)"), lines);
     }
 
     /**

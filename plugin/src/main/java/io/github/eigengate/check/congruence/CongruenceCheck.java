@@ -13,6 +13,7 @@ import io.github.eigengate.data.TableRow;
 import io.github.eigengate.theory.Arith;
 import io.github.eigengate.theory.congruence.CongruenceBounds;
 import io.github.eigengate.theory.congruence.CongruenceBounds.Plan;
+import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
@@ -24,9 +25,12 @@ import java.util.Set;
  * it holds for every ℓ up to the Sturm-type bound of {@link CongruenceBounds#forForms}; NOT CERTIFIED when the tables
  * stop before that bound. See docs/congruences.md.
  *
- * <p>With characters (det ρ̄_f = (χ_f mod 𝔭)ω^{k_f−1}): certified only for one common character χ with
- * p ∤ N_f N_g · ord χ, under identifications of the residue fields that send ζ_f to ζ_g; FALSE when no identification
- * does; NOT CERTIFIED, with the reason, for different characters or p | N_f N_g · ord χ (docs/checks.md).
+ * <p>With characters (det ρ̄_f = (χ_f mod 𝔭)ω^{k_f−1}): only identifications of the residue fields under which
+ * χ̄_f ω^{k_f−1} = χ̄_g ω^{k_g−1+2j} on (Z/lcm(N_f, N_g, p)Z)^× are admissible; FALSE when none is. Certified as
+ * without characters (the lemma of {@link CongruenceBounds} keeps Γ0(M) for different characters congruent mod 𝔭),
+ * weight 1 included; NOT CERTIFIED, with the reason, when p | N_f N_g and the weights fail k_f ≡ k_g + 2j mod p − 1
+ * (the characters' p-parts make up the determinant, and no E_{p−1}-padding joins the weights), or when
+ * lcm(N_f, N_g) is above the characters' modulus cap (docs/congruences.md).
  */
 public final class CongruenceCheck implements Check {
 
@@ -55,8 +59,9 @@ public final class CongruenceCheck implements Check {
         return new PassImpl(catalog, uncertifiedIsWarning);
     }
 
+    /** {@code compareFirst}: a claim that cannot be certified is still compared, so that a false one is named. */
     private record Claim(TableRow row, Form f, Form g, long p, long j, FpPoly primeF, FpPoly primeG,
-                         Subject subject, List<Plan> plans, String problem) {
+                         Subject subject, List<Plan> plans, String problem, boolean compareFirst) {
     }
 
     private static final class PassImpl extends ClaimPass {
@@ -89,53 +94,36 @@ public final class CongruenceCheck implements Check {
             Subject subject = new Subject("congruence", f.id() + "~" + g.id(), "p=" + p + (j != 0 ? " j=" + j : ""));
             List<Plan> plans = List.of();
             String problem = null;
+            boolean compareFirst = false;
             boolean withCharacter = !f.character().isTrivial() || !g.character().isTrivial();
-            if (f.weight() < 2 || g.weight() < 2) {
-                problem = "weight 1 is not supported: the bound needs k >= 2 on both sides";
-            } else if (withCharacter && (problem = characterProblem(f, g, p)) != null) {
-                plans = List.of();
-            } else if (CongruenceBounds.determinantsMatch(p, f.weight(), g.weight(), j)) {
+            boolean weightsMatch = CongruenceBounds.determinantsMatch(p, f.weight(), g.weight(), j);
+            if (withCharacter && lcm(f, g) > DirichletCharacter.MAX_MODULUS) {
+                problem = "lcm(N_f, N_g) is above " + DirichletCharacter.MAX_MODULUS
+                        + ", where characters are not compared";
+            } else if (weightsMatch) {
                 plans = CongruenceBounds.forForms(p, f.weight(), depletionLevel(f, p), g.weight(),
                         depletionLevel(g, p), j);
                 if (plans.isEmpty()) {
                     problem = "no Sturm-type bound is implemented for p = 3 with an odd twist (θ needs p >= 5 here)";
                 }
+            } else if (withCharacter && (f.level() % p == 0 || g.level() % p == 0)) {
+                problem = "k_f = " + f.weight() + " and k_g + 2j = " + (g.weight() + 2 * j) + " differ mod " + (p - 1)
+                        + ", so the determinants can agree only through the characters' p-parts (p | N); no "
+                        + "Sturm-type bound is implemented for that (it needs forms of level divisible by p moved "
+                        + "to level prime to p; see docs/congruences.md)";
+                compareFirst = true;
             }
-            Claim c = new Claim(row, f, g, p, j, pf, pg, subject, plans, problem);
-            if (!plans.isEmpty()) {
-                long limit = asLong(plans.get(plans.size() - 1).bound());
+            Claim c = new Claim(row, f, g, p, j, pf, pg, subject, plans, problem, compareFirst);
+            long limit = compareFirst ? Primes.CAP : plans.isEmpty() ? 0 : asLong(plans.get(plans.size() - 1).bound());
+            if (limit > 0) {
                 need(f, p, limit);
                 need(g, p, limit);
             }
             return c;
         }
 
-        /**
-         * Why a claim between forms with characters cannot be certified, or null when it can: the Sturm-type bound
-         * is applied to θ^s f♭ − θ^t g♭ in M_W(Γ0(M), χ), which needs one character χ on both sides (χ_f = χ_g
-         * after lifting to lcm(N_f, N_g)), p ∤ N_f N_g, and p ∤ ord χ (so that reduction mod 𝔓 is injective on the
-         * values and the identification of residue fields decides which embedding makes ζ_f = ζ_g).
-         */
-        private static String characterProblem(Form f, Form g, long p) {
-            if (f.level() % p == 0 || g.level() % p == 0) {
-                return "forms with a nontrivial character and p | N are not certified (the character's p-part mixes"
-                        + " with ω; see docs/congruences.md)";
-            }
-            int lcm = (int) (f.level() / gcd(f.level(), g.level()) * (long) g.level());
-            if ((long) f.level() / gcd(f.level(), g.level()) * g.level()
-                    > DirichletCharacter.MAX_MODULUS) {
-                return "lcm(N_f, N_g) is above " + DirichletCharacter.MAX_MODULUS
-                        + ", where characters are not compared";
-            }
-            if (!f.character().lift(lcm).equals(g.character().lift(lcm))) {
-                return "the characters of the two forms differ (" + f.character().cell() + " mod " + f.level()
-                        + ", " + g.character().cell() + " mod " + g.level() + "): the Sturm-type bound is"
-                        + " implemented for one common character only";
-            }
-            if (f.character().order() % p == 0) {
-                return "p divides the order of the character; the bound is implemented for p prime to it";
-            }
-            return null;
+        private static long lcm(Form f, Form g) {
+            return (long) f.level() / gcd(f.level(), g.level()) * g.level();
         }
 
         /**
@@ -171,12 +159,12 @@ public final class CongruenceCheck implements Check {
             Form g = c.g;
             long p = c.p;
             String claimText = "a_l(" + f.id() + ") = l^" + c.j + "*a_l(" + g.id() + ") mod a prime above " + p;
-            if (c.problem != null) {
+            if (c.problem != null && !c.compareFirst) {
                 notCertified(out, ID, c.row, c.subject, "a certifiable congruence", claimText,
                         "not certified: " + c.problem);
                 return;
             }
-            if (!CongruenceBounds.determinantsMatch(p, f.weight(), g.weight(), c.j)) {
+            if (!c.compareFirst && !CongruenceBounds.determinantsMatch(p, f.weight(), g.weight(), c.j)) {
                 out.error(ID, c.row.at(), c.subject, "k_f = k_g + 2j mod " + (p - 1),
                         "k_f=" + f.weight() + ", k_g=" + g.weight() + ", j=" + c.j,
                         "the congruence is false: det of the mod-p representation of " + f.id() + " is omega^"
@@ -190,14 +178,13 @@ public final class CongruenceCheck implements Check {
             }
             Residues.Store sf = store(f, p);
             Residues.Store sg = store(g, p);
-            if (reportNotIntegral(out, ID, c.row, c.subject, p, c.plans.get(0).bound(), sf, sg)) {
+            BigInteger smallest = c.compareFirst ? BigInteger.valueOf(Primes.CAP) : c.plans.get(0).bound();
+            if (reportNotIntegral(out, ID, c.row, c.subject, p, smallest, sf, sg)) {
                 return;
             }
             Set<Long> excluded = primesDividing(p, f.level(), g.level());
             long x = Math.min(sf.complete(excluded), sg.complete(excluded));
-            long top = Math.min(x, asLong(c.plans.get(c.plans.size() - 1).bound()));
-            long jr = Math.floorMod(c.j, p - 1);
-
+            long top = c.compareFirst ? x : Math.min(x, asLong(c.plans.get(c.plans.size() - 1).bound()));
             List<Match> matches = new ArrayList<>();
             for (int kf = 0; kf < sf.primes.size(); kf++) {
                 if (c.primeF != null && !sf.primes.get(kf).factor().equals(c.primeF)) {
@@ -207,15 +194,16 @@ public final class CongruenceCheck implements Check {
                     if (c.primeG != null && !sg.primes.get(kg).factor().equals(c.primeG)) {
                         continue;
                     }
-                    matches.addAll(compare(sf, kf, sg, kg, jr, top, excluded));
+                    matches.addAll(compare(sf, kf, sg, kg, c.j, top, excluded));
                 }
             }
             if (matches.isEmpty()) {
-                out.error(ID, c.row.at(), c.subject, "an identification of residue fields with zeta_" + f.id()
-                                + " = zeta_" + g.id(), "none at the primes above " + p,
-                        "the congruence is false: under every choice of primes above " + p + " the reductions of χ_f"
-                                + " and χ_g differ, so det ρ̄_f = (χ_f mod 𝔭)ω^(k_f-1) is not det(ρ̄_g ⊗ ω^j) = (χ_g mod "
-                                + "𝔭)ω^(k_g-1+2j) (Chebotarev, Brauer–Nesbitt)");
+                out.error(ID, c.row.at(), c.subject, "an identification of residue fields with (χ_f mod 𝔭)ω^(k_f-1)"
+                                + " = (χ_g mod 𝔭)ω^(k_g-1+2j)", "none at the primes above " + p,
+                        "the congruence is false: under every choice of primes above " + p + " the determinants "
+                                + "differ, det ρ̄_f = (χ_f mod 𝔭)ω^(k_f-1) against det(ρ̄_g ⊗ ω^j) = (χ_g mod 𝔭)ω^(k_g-1+2j)"
+                                + " on the units mod " + (f.level() % p == 0 || g.level() % p == 0 ? lcm(f, g)
+                                : lcm(f, g) * p) + " (Chebotarev, Brauer–Nesbitt)");
                 return;
             }
             Match best = null;
@@ -225,7 +213,7 @@ public final class CongruenceCheck implements Check {
                     continue;
                 }
                 for (Plan pl : c.plans) {
-                    if (pl.comparesAtP() && !m.agreeAtP(sf, sg)) {
+                    if (pl.comparesAtP() && !m.agreeAtP(sf, sg, p)) {
                         continue;
                     }
                     if (plan == null || pl.bound().compareTo(plan.bound()) < 0) {
@@ -254,7 +242,13 @@ public final class CongruenceCheck implements Check {
                                 + product(excluded) + " where the residues differ"
                                 + (matches.size() > 1 ? " (under the identification of residue fields that holds "
                                 + "longest; all " + matches.size() + " identifications fail)" : "")
-                                + alternative(sf, sg, c.primeF, c.primeG, jr, top, excluded));
+                                + alternative(sf, sg, c.primeF, c.primeG, c.j, top, excluded));
+                return;
+            }
+            if (c.compareFirst) {
+                notCertified(out, ID, c.row, c.subject, "a certifiable congruence", claimText + " (it holds for "
+                        + "every l <= " + top + " in the tables, mod " + best.primes() + ")", "not certified: "
+                        + c.problem);
                 return;
             }
             if (searched) {
@@ -325,19 +319,35 @@ public final class CongruenceCheck implements Check {
                 return pf + " and " + pg;
             }
 
-            boolean agreeAtP(Residues.Store sf, Residues.Store sg) {
+            /**
+             * a_p(f) ≡ a_p(g), and the p-th recursion constants χ(p)p^{k−1} (0 when p | N) agree too, so that every
+             * a_{p^e} agrees (only weight 1 at p ∤ N has a constant that is not ≡ 0).
+             */
+            boolean agreeAtP(Residues.Store sf, Residues.Store sg, long p) {
                 FiniteField.Element a = sf.atP[kf];
                 FiniteField.Element b = sg.atP[kg];
                 if (a == null || b == null) {
                     return false;
                 }
                 FiniteField big = alpha.field();
-                return big.evaluate(a.value(), alpha).equals(big.evaluate(b.value(), beta));
+                return big.evaluate(a.value(), alpha).equals(big.evaluate(b.value(), beta))
+                        && recursionConstant(sf.form, pf, alpha, p).equals(recursionConstant(sg.form, pg, beta, p));
+            }
+
+            private static FiniteField.Element recursionConstant(Form h, Residues.PrimeAbove pr,
+                                                                 FiniteField.Element embed, long p) {
+                FiniteField big = embed.field();
+                if (h.weight() >= 2 || h.level() % p == 0) {
+                    return big.zero();
+                }
+                FiniteField.Element v = Residues.characterValue(h.character(), p, h.character().order(),
+                        Residues.zeta(h, pr.field()), pr.field());
+                return big.evaluate(v.value(), embed);
             }
         }
 
         /** Every identification of the residue fields at (pf, pg), each compared for ℓ ≤ top. */
-        private static List<Match> compare(Residues.Store sf, int kf, Residues.Store sg, int kg, long jr, long top,
+        private static List<Match> compare(Residues.Store sf, int kf, Residues.Store sg, int kg, long j, long top,
                                            Set<Long> excluded) {
             Residues.PrimeAbove pf = sf.primes.get(kf);
             Residues.PrimeAbove pg = sg.primes.get(kg);
@@ -349,12 +359,13 @@ public final class CongruenceCheck implements Check {
                     : FiniteField.of(Residues.irreducible(p, l));
             FiniteField.Element alpha = big == pf.field() ? big.generator() : big.roots(pf.factor()).get(0);
             List<Match> out = new ArrayList<>();
+            long jr = Math.floorMod(j, p - 1);
             for (FiniteField.Element beta : big.roots(pg.factor())) {
                 String ident = l == 1 ? "" : "the residue fields identified inside F_" + p + "[x]/(" + big.modulus()
                         + ") by x_" + sf.form.id() + " -> " + alpha + ", x_" + sg.form.id() + " -> " + beta;
                 Match m = new Match(pf, kf, pg, kg, alpha, beta, ident);
-                if (!zetasAgree(sf, pf, alpha, sg, pg, beta, big)) {
-                    continue; // another embedding: there χ_f ≠ χ_g, so det ρ̄_f ≠ det ρ̄_g ⊗ ω^{2j}
+                if (!determinantsAgree(sf, pf, alpha, sg, pg, beta, j)) {
+                    continue; // there det ρ̄_f ≠ det(ρ̄_g ⊗ ω^j): the claim cannot hold at these primes
                 }
                 int n = Math.min(sf.ells.length, sg.ells.length);
                 boolean fast = l == 1 && sf.linear(kf) && sg.linear(kg);
@@ -394,17 +405,39 @@ public final class CongruenceCheck implements Check {
             return out;
         }
 
-        /** Whether the identification maps ζ_f mod 𝔭_f to ζ_g mod 𝔭_g (trivially so without a zeta). */
-        private static boolean zetasAgree(Residues.Store sf, Residues.PrimeAbove pf, FiniteField.Element alpha,
-                                          Residues.Store sg, Residues.PrimeAbove pg, FiniteField.Element beta,
-                                          FiniteField big) {
-            if (sf.form.zeta() == null || sg.form.zeta() == null) {
+        /**
+         * Whether (χ_f mod 𝔭_f)(u)·u^{k_f−1} = (χ_g mod 𝔭_g)(u)·u^{k_g−1+2j} under the identification, for u running
+         * over generators of (Z/LZ)^×, L = lcm(N_f, N_g, p) (when p ∤ N_f N_g they are ≡ 1 mod p and only the
+         * characters are compared: the weights are compared apart). Trivially true for two trivial characters.
+         */
+        private static boolean determinantsAgree(Residues.Store sf, Residues.PrimeAbove pf, FiniteField.Element alpha,
+                                                 Residues.Store sg, Residues.PrimeAbove pg, FiniteField.Element beta,
+                                                 long j) {
+            Form f = sf.form;
+            Form g = sg.form;
+            if (f.character().isTrivial() && g.character().isTrivial()) {
                 return true;
             }
+            long p = sf.p;
+            FiniteField big = alpha.field();
             try {
-                FiniteField.Element zf = Residues.reduce(sf.form.zeta(), pf.field());
-                FiniteField.Element zg = Residues.reduce(sg.form.zeta(), pg.field());
-                return big.evaluate(zf.value(), alpha).equals(big.evaluate(zg.value(), beta));
+                FiniteField.Element zf = Residues.zeta(f, pf.field());
+                FiniteField.Element zg = Residues.zeta(g, pg.field());
+                int n = (int) lcm(f, g);
+                for (long u : Residues.determinantGenerators(n, p)) {
+                    long ub = Math.floorMod(u, p);
+                    FiniteField.Element left = big.evaluate(Residues.characterValue(f.character(), u,
+                            f.character().order(), zf, pf.field()).value(), alpha)
+                            .multiply(big.fromLong(Residues.powMod(ub, f.weight() - 1, p)));
+                    FiniteField.Element right = big.evaluate(Residues.characterValue(g.character(), u,
+                            g.character().order(), zg, pg.field()).value(), beta)
+                            .multiply(big.fromLong(Residues.powMod(ub,
+                                    Math.floorMod(g.weight() - 1 + 2 * j, p - 1), p)));
+                    if (!left.equals(right)) {
+                        return false;
+                    }
+                }
+                return true;
             } catch (ArithmeticException e) {
                 return false;
             }
@@ -416,7 +449,8 @@ public final class CongruenceCheck implements Check {
          * other primes above p (with the declared twist) do; "" when neither.
          */
         private static String alternative(Residues.Store sf, Residues.Store sg, FpPoly primeF, FpPoly primeG,
-                                          long jr, long top, Set<Long> excluded) {
+                                          long twist, long top, Set<Long> excluded) {
+            long jr = Math.floorMod(twist, sf.p - 1);
             long p = sf.p;
             for (long j = 0; j < p - 1 && p <= 1000; j++) {
                 if (j == jr) {

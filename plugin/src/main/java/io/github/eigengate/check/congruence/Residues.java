@@ -1,5 +1,6 @@
 package io.github.eigengate.check.congruence;
 
+import io.github.eigengate.arith.DirichletCharacter;
 import io.github.eigengate.arith.FiniteField;
 import io.github.eigengate.arith.FpPoly;
 import io.github.eigengate.arith.IndexDivisibleException;
@@ -105,6 +106,52 @@ final class Residues {
             throw new ArithmeticException(r + " has " + p + " in its denominator");
         }
         return n * BigInteger.valueOf(d).modInverse(bp).longValue() % p;
+    }
+
+    /**
+     * χ(n) mod 𝔭 for a character χ whose values lie in the form's field: ζ_{ord χ} = zeta^{m / ord χ}, m the order
+     * of the form's character and {@code zeta} its reduction (unused, may be null, when ord χ ≤ 2); 0 when
+     * gcd(n, cond-modulus) > 1.
+     */
+    static FiniteField.Element characterValue(DirichletCharacter chi, long n, int formOrder, FiniteField.Element zeta,
+                                              FiniteField field) {
+        int e = chi.exponent(n);
+        if (e < 0) {
+            return field.zero();
+        }
+        if (e == 0 || chi.order() == 1) {
+            return field.one();
+        }
+        if (chi.order() == 2) {
+            return field.one().negate();
+        }
+        return zeta.pow(BigInteger.valueOf((long) e * (formOrder / chi.order())));
+    }
+
+    /** The form's zeta reduced mod the prime, null without a zeta (ord χ ≤ 2). */
+    static FiniteField.Element zeta(Form form, FiniteField field) {
+        return form.zeta() == null ? null : reduce(form.zeta(), field);
+    }
+
+    /**
+     * Generators of (Z/LZ)^×, L = lcm(N, p), for the determinant condition of a congruence between forms of levels
+     * dividing N: those of (Z/NZ)^×, lifted to be ≡ 1 mod p when p ∤ N (there the p-part only compares weights, which
+     * the checks do apart). N ≤ {@link DirichletCharacter#MAX_MODULUS}.
+     */
+    static long[] determinantGenerators(int n, long p) {
+        long[] gens = DirichletCharacter.generators(n);
+        if (n % p == 0) {
+            return gens;
+        }
+        long inv = BigInteger.valueOf(n).modInverse(BigInteger.valueOf(p)).longValue();
+        long[] out = new long[gens.length];
+        for (int i = 0; i < gens.length; i++) {
+            // u ≡ g mod N, u ≡ 1 mod p
+            long g = gens[i];
+            long t = Math.floorMod((1 - g % p) % p * inv % p, p);
+            out[i] = g + (long) n * t;
+        }
+        return out;
     }
 
     /** b^e mod p for 0 ≤ b < p < 2^31, e ≥ 0. */

@@ -1,5 +1,6 @@
 package io.github.eigengate.theory.congruence;
 
+import io.github.eigengate.arith.DirichletCharacter;
 import io.github.eigengate.arith.Rational;
 import java.math.BigInteger;
 import java.util.ArrayList;
@@ -44,7 +45,16 @@ import java.util.TreeMap;
  *
  * <p>The determinant condition k_f ≡ k_g + 2j (mod p − 1) (resp. k − 1 ≡ i + j) is also necessary: if a_ℓ(f) ≡
  * ℓ^j a_ℓ(g) for almost all ℓ then ρ̄_f ≅ ρ̄_g ⊗ ω^j (Chebotarev and Brauer–Nesbitt, p odd), and det ρ̄_f =
- * ω^{k_f−1} (Deligne; trivial character).
+ * ω^{k_f−1} (Deligne; trivial character). With characters det ρ̄_f = (χ_f mod 𝔓)ω^{k_f−1}, so the condition reads
+ * χ̄_f ω^{k_f−1} = χ̄_g ω^{k_g−1+2j} on (Z/lcm(N_f, N_g, p)Z)^×; the checks decide it in the residue field.
+ *
+ * <p><b>Characters congruent mod 𝔓</b> (lemma, proved in docs/congruences.md). If F_1 ∈ M_W(Γ0(M), χ_1) and
+ * F_2 ∈ M_W(Γ0(M), χ_2) have 𝔓-integral coefficients and χ_1(d) ≡ χ_2(d) mod 𝔓 for every d, then Sturm's bound for
+ * Γ0(M) holds for F = F_1 − F_2: F is invariant under Γ_H = {γ ∈ Γ0(M) : χ_1(d) = χ_2(d) = 1}, F|γ ≡ χ_1(d)F
+ * mod 𝔓 for γ ∈ Γ0(M), so the product P of F|γ over Γ_H\Γ0(M) (r cosets) lies in M_{Wr}(Γ0(M)) and is ≡ unit·F^r;
+ * ord F > W·m(M)/12 gives ord P > Wr·m(M)/12, so P ≡ 0 and F ≡ 0 (F_𝔓[[q]] is a domain). With χ_1 = χ_2 this is
+ * the usual bound with a character. So Γ0(M) serves for every pair of sides, with or without characters, once the
+ * determinant condition and the weight condition both hold (together they give χ̄_1 = χ̄_2).
  */
 public final class CongruenceBounds {
 
@@ -76,13 +86,23 @@ public final class CongruenceBounds {
      * @param eisensteinWeight w of the Eisenstein series G_w used, 0 for a congruence between two cusp forms
      * @param comparesAtP      whether a_p must be compared too (route DIRECT)
      * @param derivation       one line that says how W and M arose
+     * @param swapped          for an Eisenstein series with characters: E = E_w^{φ,ψ} (a_ℓ = φ(ℓ) + ψ(ℓ)ℓ^{w−1})
+     *                         instead of E_w^{ψ,φ}
      */
     public record Plan(Route route, long prime, SortedMap<Long, Integer> level, BigInteger index, long weight,
                        BigInteger bound, long leftTheta, long rightTheta, long eisensteinWeight, boolean comparesAtP,
-                       String derivation) {
+                       String derivation, boolean swapped) {
 
         public Plan {
             level = Collections.unmodifiableSortedMap(new TreeMap<>(level));
+        }
+
+        /** A plan with E_w^{ψ,φ} (or no Eisenstein series). */
+        public Plan(Route route, long prime, SortedMap<Long, Integer> level, BigInteger index, long weight,
+                    BigInteger bound, long leftTheta, long rightTheta, long eisensteinWeight, boolean comparesAtP,
+                    String derivation) {
+            this(route, prime, level, index, weight, bound, leftTheta, rightTheta, eisensteinWeight, comparesAtP,
+                    derivation, false);
         }
 
         /** M written as a number. */
@@ -127,30 +147,34 @@ public final class CongruenceBounds {
     }
 
     /**
-     * Every plan that certifies a_ℓ(f) ≡ ℓ^j a_ℓ(g) (mod 𝔓) for all primes ℓ ∤ p N_f N_g, for eigenforms f, g with
-     * trivial character, weights k_f, k_g ≥ 2 and levels N_f, N_g, sorted by bound (smallest first). Empty when no
-     * route applies (p = 3 with j odd).
+     * Every plan that certifies a_ℓ(f) ≡ ℓ^j a_ℓ(g) (mod 𝔓) for all primes ℓ ∤ p N_f N_g, for eigenforms f, g of
+     * weights k_f, k_g ≥ 1 and levels N_f, N_g, sorted by bound (smallest first). Empty when no route applies (p = 3
+     * with j odd). With characters the caller has checked the determinant condition χ̄_f ω^{k_f−1} = χ̄_g
+     * ω^{k_g−1+2j} in the residue field; with the weight part required here it gives χ̄_f = χ̄_g, and the lemma of the
+     * class comment keeps Γ0(M). Route DIRECT also needs a_p and the p-th recursion constants χ(p)p^{k−1} (0 when
+     * p | N) of both sides to agree mod 𝔓: automatic for k ≥ 2, compared by the caller at weight 1.
      *
-     * @throws IllegalArgumentException if p is not ≥ 2, a weight is below 2, a level below 1, or the determinant
-     *                                  condition fails (then the congruence is false, see the class comment)
+     * @throws IllegalArgumentException if p is not prime, a weight or a level is below 1, or k_f ≢ k_g + 2j mod
+     *                                  p − 1 (then the congruence is false when p ∤ N_f N_g, see the class comment)
      */
     public static List<Plan> forForms(long p, int kf, int nf, int kg, int ng, long j) {
         checkPrime(p);
-        if (kf < 2 || kg < 2 || nf < 1 || ng < 1) {
-            throw new IllegalArgumentException("weights must be at least 2 and levels at least 1");
+        if (kf < 1 || kg < 1 || nf < 1 || ng < 1) {
+            throw new IllegalArgumentException("weights and levels must be at least 1");
         }
         if (!determinantsMatch(p, kf, kg, j)) {
             throw new IllegalArgumentException("k_f ≢ k_g + 2j mod p − 1");
         }
         SortedMap<Long, Integer> m = depletedLevel(p, nf, ng);
         BigInteger index = SturmBound.index(m);
+        String on = " on Γ0(" + SturmBound.value(m) + ")";
         List<Plan> out = new ArrayList<>();
         long jr = Math.floorMod(j, p - 1);
         if (jr == 0) {
             long w = pad(p, kf, kg);
             if (w > 0) {
                 out.add(new Plan(Route.DIRECT, p, m, index, w, bound(w, index), 0, 0, 0, true,
-                        "f♭ − g♭" + padText(p, kf, kg, w) + " on Γ0(" + SturmBound.value(m) + "), a_p compared too"));
+                        "f♭ − g♭" + padText(p, kf, kg, w) + on + ", a_p compared too"));
             }
         }
         if (p >= 5) {
@@ -158,8 +182,7 @@ public final class CongruenceBounds {
                 long t = oneTo(s + jr, p);
                 long w = Math.max(kf + s * (p + 1), kg + t * (p + 1));
                 String text = "θ^" + s + " f♭ − θ^" + t + " g♭ (weights " + (kf + s * (p + 1)) + ", "
-                        + (kg + t * (p + 1)) + ", brought to " + w + " by E_" + (p - 1) + ") on Γ0("
-                        + SturmBound.value(m) + ")";
+                        + (kg + t * (p + 1)) + ", brought to " + w + " by E_" + (p - 1) + ")" + on;
                 out.add(new Plan(Route.THETA, p, m, index, w, bound(w, index), s, t, 0, false, text));
             }
         }
@@ -238,6 +261,105 @@ public final class CongruenceBounds {
     }
 
     /**
+     * Every plan that certifies a_ℓ(f) ≡ ψ(ℓ)ℓ^i + φ(ℓ)ℓ^j (mod 𝔓) for all primes ℓ ∤ pN, for an eigenform f of
+     * weight k ≥ 1 and level N, and characters ψ, φ mod N not both trivial (for both trivial see
+     * {@link #forEisenstein}), sorted by bound. The Eisenstein series is E_w^{ψ,φ} = c + Σ_n (Σ_{d | n} ψ(n/d)φ(d)
+     * d^{w−1}) q^n ∈ M_w(Γ0(uv), ψφ), u, v the conductors of ψ, φ taken primitive (Diamond–Shurman, Thm 4.5.2 for
+     * w ≥ 3, §4.6 for w = 2, §4.8 for w = 1; it exists when ψφ(−1) = (−1)^w), a normalised eigenform with
+     * a_ℓ = ψ(ℓ) + φ(ℓ)ℓ^{w−1}, or E_w^{φ,ψ} with the roles exchanged ({@link Plan#swapped}). Its constant term c is 0
+     * when the first character is nontrivial and w ≥ 2, or when both are nontrivial (ibid.); otherwise depletion at a
+     * prime q ≠ p of the level kills it (the factor (1 − ψ(q))(1 − φ(q)q^{w−1}), or 1 − a_q when q | uv, is 0 for ψ
+     * trivial; E_1^{ψ,φ} = E_1^{φ,ψ}), and without such a q there is no plan. Steps 1–4 of the class comment then apply
+     * on Γ0(M), M = lcm(N, uv, Q²), with the lemma on characters congruent mod 𝔓 (class comment).
+     *
+     * <p>Route DIRECT (first exponent ≡ 0 mod p − 1, any p) compares a_p(f) with a_p(E) = ψ(p) + φ(p)p^{w−1}
+     * (primitive values) and the recursion constants χ(p)p^{k−1} with ψφ(p)p^{w−1} (0 at p | N resp. p | uv): the
+     * caller does. Route THETA needs p ≥ 5. The caller has checked the determinant condition χ̄ω^{k−1} = ψ̄φ̄ω^{i+j}
+     * in the residue field; its weight part k − 1 ≡ i + j (mod p − 1) is required here.
+     *
+     * @throws IllegalArgumentException if p is not prime, k < 1, N < 1, ψ, φ are not characters mod N, or
+     *                                  k − 1 ≢ i + j (mod p − 1)
+     */
+    public static List<Plan> forEisenstein(long p, int k, int n, long i, long j, DirichletCharacter psi,
+                                           DirichletCharacter phi) {
+        checkPrime(p);
+        if (k < 1 || n < 1 || psi.modulus() != n || phi.modulus() != n) {
+            throw new IllegalArgumentException("weight and level must be positive, the characters mod the level");
+        }
+        if (!eisensteinDeterminantMatches(p, k, i, j)) {
+            throw new IllegalArgumentException("k − 1 ≢ i + j mod p − 1");
+        }
+        long uv = (long) psi.conductor() * phi.conductor();
+        SortedMap<Long, Integer> m = depletedLevel(p, n, uv);
+        boolean bad = m.keySet().stream().anyMatch(q -> q != p);
+        BigInteger index = SturmBound.index(m);
+        String on = " on Γ0(" + SturmBound.value(m) + ")";
+        boolean odd = psi.multiply(phi).isOdd();
+        List<Plan> out = new ArrayList<>();
+        long step = p == 2 ? 1 : p - 1;
+        for (boolean swapped : new boolean[] {false, true}) {
+            DirichletCharacter first = swapped ? phi : psi;
+            DirichletCharacter second = swapped ? psi : phi;
+            long a = Math.floorMod(swapped ? j : i, step);
+            long b = Math.floorMod(swapped ? i : j, step);
+            String name = swapped ? "E^{φ,ψ}" : "E^{ψ,φ}";
+            if (a == 0) {
+                long bestW = -1;
+                long bestPad = Long.MAX_VALUE;
+                for (long w = 1; w <= Math.max(k, 3) + 2 * step + 2; w++) {
+                    if (Math.floorMod(w - 1 - b, step) != 0 || (w % 2 == 1) != odd
+                            || !constantTermVanishes(first, second, w, bad)) {
+                        continue;
+                    }
+                    long pw = pad(p, k, w);
+                    if (pw > 0 && pw < bestPad) {
+                        bestPad = pw;
+                        bestW = w;
+                    }
+                }
+                if (bestW > 0) {
+                    out.add(new Plan(Route.DIRECT, p, m, index, bestPad, bound(bestPad, index), 0, 0, bestW, true,
+                            "f♭ − " + name + "_" + bestW + "♭" + padText(p, k, bestW, bestPad) + on
+                                    + ", a_p and the p-th Hecke recursion compared too", swapped));
+                }
+            }
+            if (p >= 5) {
+                long w = Math.floorMod(b - a, p - 1) + 1;
+                while (w < 3) {
+                    w += p - 1;
+                }
+                if ((w % 2 == 1) != odd || !constantTermVanishes(first, second, w, bad)) {
+                    continue;
+                }
+                for (long s : new long[] {1, oneTo(1 - a, p)}) {
+                    long t = oneTo(s + a, p);
+                    long weight = Math.max(k + s * (p + 1), w + t * (p + 1));
+                    String text = "θ^" + s + " f♭ − θ^" + t + " " + name + "_" + w + "♭ (weights " + (k + s * (p + 1))
+                            + ", " + (w + t * (p + 1)) + ", brought to " + weight + " by E_" + (p - 1) + ")" + on;
+                    out.add(new Plan(Route.THETA, p, m, index, weight, bound(weight, index), s, t, w, false, text,
+                            swapped));
+                }
+            }
+        }
+        return sorted(out);
+    }
+
+    /**
+     * Whether the constant term of E_w^{first,second} is 0, or is killed by depleting at a prime q ≠ p of the level
+     * ({@code bad}); see {@link #forEisenstein(long, int, int, long, long, DirichletCharacter, DirichletCharacter)}.
+     */
+    private static boolean constantTermVanishes(DirichletCharacter first, DirichletCharacter second, long w,
+                                                boolean bad) {
+        if (!first.isTrivial() && !second.isTrivial()) {
+            return true;
+        }
+        if (!first.isTrivial() && w >= 2) {
+            return true;
+        }
+        return bad;
+    }
+
+    /**
      * The smallest weight W ≥ max(a, b) reachable from both a and b by multiplying with forms ≡ 1 mod p: for p ≥ 5
      * powers of E_{p−1} (W − a, W − b ∈ (p−1)N), for p = 2, 3 products of E_4, E_6 (W − a, W − b ∈ {0, 4, 6, 8, …});
      * −1 when there is none.
@@ -295,7 +417,8 @@ public final class CongruenceBounds {
         List<Plan> unique = new ArrayList<>();
         for (Plan pl : plans) {
             if (unique.stream().noneMatch(u -> u.route() == pl.route() && u.leftTheta() == pl.leftTheta()
-                    && u.rightTheta() == pl.rightTheta() && u.eisensteinWeight() == pl.eisensteinWeight())) {
+                    && u.rightTheta() == pl.rightTheta() && u.eisensteinWeight() == pl.eisensteinWeight()
+                    && u.swapped() == pl.swapped())) {
                 unique.add(pl);
             }
         }
