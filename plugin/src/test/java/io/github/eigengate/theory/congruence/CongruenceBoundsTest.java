@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import io.github.eigengate.arith.DirichletCharacter;
 import io.github.eigengate.arith.Rational;
 import io.github.eigengate.theory.congruence.CongruenceBounds.Plan;
 import io.github.eigengate.theory.congruence.CongruenceBounds.Route;
@@ -236,6 +237,49 @@ class CongruenceBoundsTest {
                 }
                 assertTrue(pl.levelValue().mod(big(nf)).signum() == 0 && pl.levelValue().mod(big(ng)).signum() == 0);
             }
+        }
+    }
+
+    /**
+     * Eisenstein series with characters: the weight-1 dihedral form of level 23 against E_1^{1,χ}, χ = (−23/·) of
+     * conductor 23 (Diamond–Shurman §4.8): p = 3, route DIRECT in weight 1 on Γ0(23²), B = ⌊1·552/12⌋ = 46; and at
+     * level 23 = cond φ with p = 23 itself there is no prime q ≠ p to deplete at, so ψ trivial leaves the constant term
+     * L(1 − w, φ)/2 of E_w^{1,φ} and only E_w^{φ,1} (constant 0 for w ≥ 2) gives plans.
+     */
+    @Test
+    void eisensteinSeriesWithCharacters() {
+        DirichletCharacter one = DirichletCharacter.trivial(23);
+        DirichletCharacter chi = DirichletCharacter.fromValues(23, new long[] {5}, new long[] {11}, new long[] {22});
+        List<Plan> plans = CongruenceBounds.forEisenstein(3, 1, 23, 0, 0, one, chi);
+        assertEquals(Route.DIRECT, plans.get(0).route());
+        assertEquals(1, plans.get(0).weight());
+        assertEquals(1, plans.get(0).eisensteinWeight());
+        assertEquals(big(46), plans.get(0).bound());
+        List<Plan> at23 = CongruenceBounds.forEisenstein(23, 12, 23, 0, 11, one, chi);
+        assertFalse(at23.isEmpty());
+        for (Plan pl : at23) {
+            assertTrue(pl.swapped(), pl.derivation());
+        }
+        assertThrows(IllegalArgumentException.class, () -> CongruenceBounds.forEisenstein(3, 2, 23, 0, 0, one, chi));
+    }
+
+    /** The generators of (Z/NZ)^× reach the whole group (counted by closure), for every N ≤ 200. */
+    @Test
+    void unitGeneratorsGenerate() {
+        for (int n = 1; n <= 200; n++) {
+            java.util.Set<Long> reached = new java.util.HashSet<>(List.of(1L % n));
+            java.util.ArrayDeque<Long> todo = new java.util.ArrayDeque<>(reached);
+            long[] gens = DirichletCharacter.generators(n);
+            while (!todo.isEmpty()) {
+                long x = todo.poll();
+                for (long g : gens) {
+                    long y = x * g % n;
+                    if (reached.add(y)) {
+                        todo.add(y);
+                    }
+                }
+            }
+            assertEquals(n == 1 ? 1 : io.github.eigengate.theory.Arith.phi(n), reached.size(), "N = " + n);
         }
     }
 }
